@@ -5,5 +5,7 @@ const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
   serverExternalPackages: ["pg", "nodemailer"],
+  // forbidden() gives console pages a real 403 with its own page when a role lacks a permission.
+  experimental: { authInterrupts: true },
 };
 export default nextConfig;

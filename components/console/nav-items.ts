@@ -6,6 +6,15 @@ export interface NavItem {
   href: string;
   label: string;
   permission: Permission;
+  /** Shown only when the development mailbox is enabled (DEV_MAILBOX=1). */
+  devOnly?: boolean;
 }
 
-export const NAV_ITEMS: NavItem[] = [];
+export const NAV_ITEMS: NavItem[] = [
+  { href: "/console", label: "Overview", permission: "overview:read" },
+  { href: "/console/keys", label: "API keys", permission: "keys:manage-own" },
+  { href: "/console/call-log", label: "Call log", permission: "calllog:read-own" },
+  { href: "/console/members", label: "Members", permission: "members:manage" },
+  { href: "/console/mailbox", label: "Mailbox (dev)", permission: "mailbox:read", devOnly: true },
+  { href: "/docs/api", label: "API reference", permission: "apidocs:read" },
+];

@@ -15,6 +15,10 @@ export const PERMISSIONS = {
   "calllog:read-all": ["admin", "auditor"],
   "calllog:read-own": ["admin", "engineer", "auditor", "developer"],
   "apidocs:try": ["admin", "engineer", "developer"],
+  "apidocs:read": ["admin", "engineer", "auditor", "developer"],
+  "overview:read": ["admin", "engineer", "auditor", "developer"],
+  // The development mailbox exists only when the local fake SMTP receiver does (DEV_MAILBOX=1).
+  "mailbox:read": ["admin", "engineer", "auditor", "developer"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;
