@@ -63,3 +63,44 @@ export function problemResponse(
   if (rest.requestId) h.set("x-request-id", rest.requestId);
   return new Response(JSON.stringify(body), { status: body.status, headers: h });
 }
+
+/** Thrown by handlers and helpers; the API wrapper turns it into a problem response. */
+export class ApiError extends Error {
+  constructor(
+    readonly code: ProblemCode,
+    readonly detail: string,
+    readonly extra: { errors?: FieldError[]; headers?: HeadersInit } = {},
+  ) {
+    super(detail);
+    this.name = "ApiError";
+  }
+
+  get status(): number {
+    return PROBLEMS[this.code].status;
+  }
+}
+
+/** RFC 6901: "~" becomes "~0" and "/" becomes "~1" inside each reference token. */
+export function jsonPointer(path: readonly PropertyKey[]): string {
+  return path.map((p) => "/" + String(p).replace(/~/g, "~0").replace(/\//g, "~1")).join("");
+}
+
+interface IssueLike {
+  code?: string;
+  path: readonly PropertyKey[];
+  message: string;
+  keys?: readonly string[];
+}
+
+/** One field error per zod issue; an unknown-key issue becomes one error per key so each has a pointer. */
+export function fieldErrorsFromIssues(issues: readonly IssueLike[], base: readonly PropertyKey[] = []): FieldError[] {
+  const out: FieldError[] = [];
+  for (const issue of issues) {
+    if (issue.code === "unrecognized_keys" && issue.keys?.length) {
+      for (const k of issue.keys) out.push({ pointer: jsonPointer([...base, ...issue.path, k]), message: "Unknown field" });
+    } else {
+      out.push({ pointer: jsonPointer([...base, ...issue.path]), message: issue.message });
+    }
+  }
+  return out;
+}
