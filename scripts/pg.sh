@@ -34,7 +34,8 @@ ensure_installed() {
 
 # As root, server commands run as `postgres`; as anyone else, as themselves.
 run_pg() {
-  if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  # From / because the checkout may not be readable by `postgres`.
+  if [ "$(id -u)" -eq 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 # One place decides where the data lives, so start, test and stop agree.
@@ -58,16 +59,27 @@ prepare_dir() {
   chmod 700 "$PGDATA"
 }
 
-is_running() { run_pg "$BIN/pg_ctl" -D "$PGDATA" status >/dev/null 2>&1; }
-
-# After a kill -9 the pid file stays behind; if its pid now belongs to another process, postgres
-# would refuse to start, so drop the file when no postgres owns that pid.
-clear_stale_pid() {
-  local pidfile="$PGDATA/postmaster.pid" pid
-  [ -f "$pidfile" ] || return 0
+# The server counts as running only if the pid in its pid file is a live (not zombie) postgres process.
+# pg_ctl's own check is fooled after a kill -9 when nobody reaps the dead postmaster (containers whose
+# init does not reap), and by a pid reused by another program.
+server_pid_alive() {
+  local pidfile="$PGDATA/postmaster.pid" pid state
+  [ -f "$pidfile" ] || return 1
   pid="$(head -1 "$pidfile" 2>/dev/null || true)"
-  if [ -n "$pid" ] && [ -d "/proc/$pid" ] && grep -q postgres "/proc/$pid/comm" 2>/dev/null; then return 0; fi
-  log "removing stale pid file (pid ${pid:-?} is gone)"
+  [ -n "$pid" ] && [ -r "/proc/$pid/stat" ] || return 1
+  grep -q postgres "/proc/$pid/comm" 2>/dev/null || return 1
+  state="$(sed 's/^.*) //' "/proc/$pid/stat" | cut -d' ' -f1)"
+  [ "$state" != "Z" ]
+}
+
+is_running() { server_pid_alive; }
+
+# After a kill -9 the pid file stays behind; postgres would refuse to start while its pid looks alive.
+clear_stale_pid() {
+  local pidfile="$PGDATA/postmaster.pid"
+  [ -f "$pidfile" ] || return 0
+  server_pid_alive && return 0
+  log "removing stale pid file (pid $(head -1 "$pidfile" 2>/dev/null || echo '?') is gone)"
   rm -f "$pidfile"
 }
 
