@@ -15,7 +15,7 @@ export default defineConfig({
         test: {
           name: "integration",
           include: ["tests/integration/**/*.test.ts"],
-          globalSetup: ["tests/helpers/global-db.ts"],
+          globalSetup: ["tests/helpers/global-db.ts", "tests/helpers/global-smtp.ts"],
           setupFiles: ["tests/helpers/integration-env.ts"],
           fileParallelism: false,
           hookTimeout: 60_000,
@@ -27,7 +27,7 @@ export default defineConfig({
         test: {
           name: "e2e",
           include: ["tests/e2e/**/*.test.ts"],
-          globalSetup: ["tests/helpers/global-db.ts", "tests/helpers/global-app.ts"],
+          globalSetup: ["tests/helpers/global-db.ts", "tests/helpers/global-smtp.ts", "tests/helpers/global-app.ts"],
           setupFiles: ["tests/helpers/integration-env.ts"],
           fileParallelism: false,
           hookTimeout: 120_000,

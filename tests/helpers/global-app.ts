@@ -1,7 +1,7 @@
 // For e2e: serve the built app (`next build` must have run, see scripts/test.sh) on the test port.
 import { spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
-import { APP_PORT, APP_URL, TEST_DATABASE_URL } from "./test-env";
+import { APP_PORT, APP_URL, SMTP_PORT, TEST_DATABASE_URL } from "./test-env";
 
 const ROOT = path.resolve(import.meta.dirname, "../..");
 
@@ -30,6 +30,8 @@ export default async function setup() {
         NEXTAUTH_URL: APP_URL,
         NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET ?? "test-secret-not-for-production",
         NEXT_TELEMETRY_DISABLED: "1",
+        EMAIL_SERVER: `smtp://127.0.0.1:${SMTP_PORT}`,
+        DEV_MAILBOX: "1",
       },
       stdio: ["ignore", "inherit", "inherit"],
     });
