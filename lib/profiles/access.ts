@@ -1,32 +1,23 @@
-import type { Role } from "@/db/schema";
+// Who is acting, and the typed refusals lib/profiles and lib/audit throw. The error classes are the
+// console's own (lib/auth/errors.ts), so server actions and console routes map them in one place.
+import type { Member } from "@/lib/auth/context";
+import { ForbiddenError, InputError, NotFoundError as AuthNotFoundError } from "@/lib/auth/errors";
 import { can, type Permission } from "@/lib/auth/roles";
 
-// Who is acting. Console pages build it from the session; tests build it directly. Every lib function
-// that changes or reveals organisation data takes one and checks it before touching the database.
-export interface Actor {
-  userId: string;
-  organisationId: string;
-  role: Role;
-}
+/** The part of a signed-in member these functions need; tests build it directly. */
+export type Actor = Pick<Member, "userId" | "organisationId" | "role">;
 
-export class ForbiddenError extends Error {
-  readonly code = "forbidden" as const;
-  constructor(readonly permission: Permission, role: Role) {
-    super(`The ${role} role may not do this (needs ${permission})`);
-    this.name = "ForbiddenError";
-  }
-}
+export { ForbiddenError };
 
-export class NotFoundError extends Error {
-  readonly code = "not_found" as const;
+export class NotFoundError extends AuthNotFoundError {
   constructor(what: string) {
     super(`${what} not found`);
-    this.name = "NotFoundError";
   }
 }
 
-export class ConflictError extends Error {
-  readonly code = "conflict" as const;
+/** A request that is well-formed but cannot apply to the current state (e.g. publishing without a draft). */
+export class ConflictError extends InputError {
+  readonly conflict = true;
   constructor(message: string) {
     super(message);
     this.name = "ConflictError";
@@ -34,19 +25,18 @@ export class ConflictError extends Error {
 }
 
 export interface FieldIssue {
-  /** Dotted path of the field inside the submitted object, "" for the whole object. */
+  /** Dotted path of the field inside the submitted object (react-hook-form's naming), "" for the whole object. */
   path: string;
   message: string;
 }
 
-export class InvalidInputError extends Error {
-  readonly code = "validation_failed" as const;
+export class InvalidInputError extends InputError {
   constructor(readonly issues: FieldIssue[]) {
-    super(issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join("; "));
+    super(issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join("; "), issues[0]?.path || undefined);
     this.name = "InvalidInputError";
   }
 }
 
 export function authorise(actor: Actor, permission: Permission): void {
-  if (!can(actor.role, permission)) throw new ForbiddenError(permission, actor.role);
+  if (!can(actor.role, permission)) throw new ForbiddenError(`The ${actor.role} role may not do this (needs ${permission}).`);
 }
