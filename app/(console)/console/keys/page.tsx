@@ -1,0 +1,28 @@
+import type { Metadata } from "next";
+import { KeysPanel } from "@/components/console/keys/keys-panel";
+import { PageHeader } from "@/components/ui/page-header";
+import { can } from "@/lib/auth/roles";
+import { requireMember } from "@/lib/auth/session";
+import { listKeys } from "@/lib/keys/manage";
+
+export const metadata: Metadata = { title: "API keys" };
+export const dynamic = "force-dynamic";
+
+export default async function KeysPage() {
+  const m = await requireMember("keys:manage-own");
+  const keys = await listKeys({ actor: m });
+  const all = can(m.role, "keys:manage-all");
+  return (
+    <>
+      <PageHeader
+        title="API keys"
+        description={
+          all
+            ? "Every key of your organisation. Systems send a key as `Authorization: Bearer <key>`. Sandbox keys (gg_sbx_) are for trying the API; live keys (gg_live_) grade real work."
+            : "The keys you created. Systems send a key as `Authorization: Bearer <key>`. Sandbox keys (gg_sbx_) are for trying the API; live keys (gg_live_) grade real work."
+        }
+      />
+      <KeysPanel initialKeys={keys} canCreateLive={can(m.role, "keys:create-live")} showsAllKeys={all} />
+    </>
+  );
+}
