@@ -27,7 +27,16 @@ export const gradingsBatch = (): RouteConfig => {
       },
     },
     responses: {
-      200: { description: "Every item was invalid; nothing was stored.", headers: rateLimitHeaders, content: { "application/json": { schema: BatchResultSchema } } },
+      200: {
+        description: "Every item was invalid; nothing was stored.",
+        headers: rateLimitHeaders,
+        content: {
+          "application/json": {
+            schema: BatchResultSchema,
+            example: { graded: 0, invalid: 1, counts: { pass: 0, marginal: 0, fail: 0 }, items: [{ index: 0, status: "invalid", errors: [{ pointer: "/tests/0/measurements", message: "Invalid input: expected array, received undefined" }] }] },
+          },
+        },
+      },
       201: {
         description: "At least one item was graded and stored.",
         headers: rateLimitHeaders,

@@ -13,6 +13,7 @@ export const metaHealth = (): RouteConfig => ({
   path: "/api/v1/health",
   operationId: "getHealth",
   tags: ["Service"],
+  security: [],
   summary: "Service health",
   description: "No key needed. Answers 503 when the database cannot be reached.",
   responses: {

@@ -6,6 +6,7 @@ export const metaOpenapi = (): RouteConfig => ({
   path: "/api/v1/openapi.json",
   operationId: "getOpenApiDocument",
   tags: ["Service"],
+  security: [],
   summary: "This API's OpenAPI 3.1 document",
   description: "No key needed. Generated from the same schemas that validate requests.",
   responses: {
