@@ -2,12 +2,12 @@
 // manifest with each file's SHA-256 and a SHA256SUMS file that `sha256sum -c` checks without Glassgrade.
 // Files are written to a temporary folder batch by batch (flat memory), then streamed out as one tar.
 import { createHash } from "node:crypto";
-import { mkdtemp, open, rm, writeFile, type FileHandle } from "node:fs/promises";
+import { mkdir, mkdtemp, open, readFile, rm, writeFile, type FileHandle } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { countVerdicts, streamVerdicts } from "@/db/queries/verdict-stream";
 import { ENGINE_VERSION } from "@/lib/grading";
-import { authorise, InvalidInputError } from "@/lib/profiles/access";
+import { authorise, InvalidInputError, NotFoundError } from "@/lib/profiles/access";
 import type { ProfileContext } from "@/lib/profiles/context";
 import { csvRow } from "./csv";
 import { tarStream, type TarEntry } from "./tar";
@@ -58,17 +58,27 @@ export interface BuiltPack {
 const VERDICT_CSV_HEADER = ["id", "seq", "created_at", "link_ref", "verdict", "headroom_db", "profile", "engine_version", "reason_codes", "digest", "prev_digest", "test_id"];
 const TEST_CSV_HEADER = ["id", "created_at", "link_ref", "input_json"];
 
+/** Packs are built into `<tmp>/glassgrade-pack-<token>`; the token is what the console downloads by. */
+export const PACK_TOKEN = /^[0-9a-f]{32}$/;
+
+export function packDir(token: string): string {
+  if (!PACK_TOKEN.test(token)) throw new InvalidInputError([{ path: "token", message: "Not an audit pack token" }]);
+  return path.join(tmpdir(), `glassgrade-pack-${token}`);
+}
+
 export async function buildAuditPack(
   ctx: ProfileContext,
   range: { from?: Date; to?: Date; batchSize?: number },
   onProgress?: (done: number, total: number) => void,
-  now: () => Date = () => new Date(),
+  build: { now?: () => Date; token?: string } = {},
 ): Promise<BuiltPack> {
+  const now = build.now ?? (() => new Date());
   authorise(ctx.actor, "audit:export");
   if (range.from && range.to && range.from >= range.to) throw new InvalidInputError([{ path: "to", message: "The end must come after the start" }]);
   const opts = { organisationId: ctx.actor.organisationId, from: range.from, to: range.to, order: "chain" as const, withTest: true, withResult: true, batchSize: range.batchSize ?? 1000 };
   const total = await countVerdicts(ctx.db, opts);
-  const dir = await mkdtemp(path.join(tmpdir(), "glassgrade-pack-"));
+  const dir = build.token ? packDir(build.token) : await mkdtemp(path.join(tmpdir(), "glassgrade-pack-"));
+  if (build.token) await mkdir(dir, { mode: 0o700 });
   const cleanup = () => rm(dir, { recursive: true, force: true });
   try {
     const files = {
@@ -148,4 +158,34 @@ export function packTarStream(pack: BuiltPack) {
   const done = () => void pack.cleanup();
   stream.once("close", done);
   return stream;
+}
+
+/**
+ * Reopens a pack built earlier in this machine's temporary folder, for the member who built it only
+ * (another organisation's token reads as not found).
+ */
+export async function openBuiltPack(ctx: ProfileContext, token: string): Promise<BuiltPack> {
+  authorise(ctx.actor, "audit:export");
+  const dir = packDir(token);
+  let manifest: PackManifest;
+  try {
+    manifest = JSON.parse(await readFile(path.join(dir, "manifest.json"), "utf8")) as PackManifest;
+  } catch {
+    throw new NotFoundError("Audit pack");
+  }
+  if (manifest.organisationId !== ctx.actor.organisationId || manifest.generatedByUserId !== ctx.actor.userId) throw new NotFoundError("Audit pack");
+  const names = ["manifest.json", "SHA256SUMS", ...manifest.files.map((f) => f.name)];
+  return { dir, manifest, entries: names.map((n) => ({ name: `audit-pack/${n}`, path: path.join(dir, n) })), cleanup: () => rm(dir, { recursive: true, force: true }) };
+}
+
+/** Removes packs nobody downloaded; called before each new build so the temporary folder stays small. */
+export async function sweepStalePacks(maxAgeMs = 60 * 60 * 1000): Promise<void> {
+  const { readdir, stat } = await import("node:fs/promises");
+  const root = tmpdir();
+  for (const name of await readdir(root).catch(() => [] as string[])) {
+    if (!/^glassgrade-pack-/.test(name)) continue;
+    const full = path.join(root, name);
+    const info = await stat(full).catch(() => null);
+    if (info && Date.now() - info.mtimeMs > maxAgeMs) await rm(full, { recursive: true, force: true });
+  }
 }

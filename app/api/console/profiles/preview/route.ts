@@ -1,0 +1,16 @@
+// POST /api/console/profiles/preview — impact preview of a draft, streamed as NDJSON progress + result.
+import { getDb } from "@/db";
+import { withConsoleSession } from "@/lib/auth/console-route";
+import { draftProfileFor, previewImpact } from "@/lib/profiles/impact-preview";
+import { ndjsonResponse } from "@/lib/profiles/ndjson";
+import { authorise } from "@/lib/profiles/access";
+import { PreviewRequestSchema, toDates } from "@/lib/profiles/requests";
+
+export const dynamic = "force-dynamic";
+export const POST = withConsoleSession(async ({ member, req }) => {
+  const body = PreviewRequestSchema.parse(await req.json().catch(() => ({})));
+  const ctx = { db: getDb(), actor: member };
+  authorise(member, "profiles:edit");
+  const profile = await draftProfileFor(ctx, body.slug, body.limits);
+  return ndjsonResponse(previewImpact(ctx, profile, { limit: body.limit, ...toDates(body) }, req.signal), req.signal);
+});
