@@ -12,6 +12,9 @@ export interface NavItem {
 
 export const NAV_ITEMS: NavItem[] = [
   { href: "/console", label: "Overview", permission: "overview:read" },
+  { href: "/console/verdicts", label: "Verdicts", permission: "verdicts:read" },
+  { href: "/console/profiles", label: "Profiles", permission: "profiles:read" },
+  { href: "/console/audit", label: "Audit", permission: "verdicts:replay" },
   { href: "/console/keys", label: "API keys", permission: "keys:manage-own" },
   { href: "/console/call-log", label: "Call log", permission: "calllog:read-own" },
   { href: "/console/members", label: "Members", permission: "members:manage" },
