@@ -4,6 +4,7 @@ import bcrypt from "bcryptjs";
 import { and, eq, sql } from "drizzle-orm";
 import { closeDb, getDb, type Database } from "./index";
 import { memberships, organisations, users, type Role } from "./schema";
+import { seedDemoApi } from "./seed-demo-gradings";
 
 export const DEMO_PASSWORD = "glassgrade-demo";
 
@@ -43,13 +44,17 @@ export async function seedOrganisationsAndUsers(db: Database) {
 
 export async function seed(db: Database) {
   const orgIds = await seedOrganisationsAndUsers(db);
-  return { orgIds };
+  // Demo sandbox key and ~80 back-dated gradings for Northmere (db/seed-demo-gradings.ts).
+  const api = await seedDemoApi(db, orgIds.northmere);
+  return { orgIds, api };
 }
 
 if (process.argv[1] && /db[\\/]seed\.ts$/.test(process.argv[1])) {
   seed(getDb())
-    .then(() => {
+    .then((result) => {
       console.log("[seed] demo data ready");
+      console.log(`[seed] Northmere demo sandbox API key (demo only): ${result.api.sandboxKey}`);
+      console.log(`[seed] Northmere has ${result.api.gradings} stored verdicts (${result.api.created} added now)`);
     })
     .catch((err) => {
       console.error("[seed] failed:", err);
