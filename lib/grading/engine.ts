@@ -1,7 +1,7 @@
 // grade(test, profile): the one entry point of the engine. Pure and synchronous: the same validated
 // test and profile always give the same result.
 import { countComponents, type LengthChoice } from "./budget";
-import { addReason, createContext, type GradingContext } from "./context";
+import { addReason, createContext, fmt, type GradingContext } from "./context";
 import { decide, headroom, severityRank, worse } from "./decide";
 import { gradeEvents } from "./event-rules";
 import { gradeInspections, gradeLength, gradeOrl, gradePower, gradeSpectralLoss } from "./link-rules";
@@ -178,7 +178,10 @@ export function checkLengthLimit(
     unit: "m",
     rule,
     source,
-    message: `Link length ${Math.round(lengthM * 10) / 10} m is ${kind === "max" ? "beyond" : "short of"} the ${what} of ${limitM} m${outcome === "marginal" ? " within the length guard band" : ""}.`,
+    message:
+      outcome === "marginal"
+        ? `Link length ${fmt(lengthM)} m is within the length guard band of the ${what} of ${fmt(limitM)} m.`
+        : `Link length ${fmt(lengthM)} m is ${kind === "max" ? "beyond" : "short of"} the ${what} of ${fmt(limitM)} m.`,
   });
 }
 
