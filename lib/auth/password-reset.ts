@@ -1,5 +1,4 @@
 import { and, eq, gt, isNull } from "drizzle-orm";
-import { z } from "zod";
 import { getDb } from "@/db";
 import { passwordResets, users } from "@/db/schema";
 import { appBaseUrl } from "@/lib/mail/config";
@@ -7,16 +6,13 @@ import { sendMail } from "@/lib/mail/send";
 import { passwordResetMail } from "@/lib/mail/templates";
 import { NotFoundError } from "./errors";
 import { findUserByEmail } from "./memberships";
-import { hashPassword, passwordSchema } from "./password";
+import { hashPassword } from "./password";
+import { resetPasswordSchema, resetRequestSchema } from "./reset-schemas";
 import { hashToken, newToken } from "./tokens";
 
 export const RESET_MINUTES = 60;
 
-export const resetRequestSchema = z.object({ email: z.email("Enter an e-mail address.").max(320) });
-export const resetPasswordSchema = z
-  .object({ token: z.string().min(20).max(200), password: passwordSchema, confirm: z.string() })
-  .refine((v) => v.password === v.confirm, { message: "The two passwords differ.", path: ["confirm"] });
-export type ResetPasswordInput = z.input<typeof resetPasswordSchema>;
+export { resetPasswordSchema, resetRequestSchema, type ResetPasswordInput } from "./reset-schemas";
 
 /**
  * Mails a reset link when the address belongs to an account. Answers the same either way, so the form

@@ -1,13 +1,9 @@
 import bcrypt from "bcryptjs";
-import { z } from "zod";
 
 // bcrypt cost 12: about a quarter of a second per hash here, slow enough for stolen hashes, quick for a person.
 export const PASSWORD_COST = 12;
 
-export const passwordSchema = z
-  .string()
-  .min(12, "Use at least 12 characters.")
-  .max(200, "Use at most 200 characters.");
+export { passwordSchema } from "./password-schema";
 
 export function hashPassword(plain: string): Promise<string> {
   return bcrypt.hash(plain, PASSWORD_COST);

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { passwordSchema } from "@/lib/auth/password";
+import { passwordSchema } from "@/lib/auth/password-schema";
 
 export const roleSchema = z.enum(["admin", "engineer", "auditor", "developer"]);
 
