@@ -6,7 +6,9 @@ export const ProfileSlugSchema = z
   .trim()
   .min(2, "Use at least 2 characters")
   .max(63, "Use at most 63 characters")
-  .regex(/^[a-z0-9][a-z0-9-]*[a-z0-9]$/, "Lower-case letters, digits and dashes; start and end with a letter or digit");
+  .regex(/^[a-z0-9][a-z0-9-]*[a-z0-9]$/, "Lower-case letters, digits and dashes; start and end with a letter or digit")
+  // The console serves templates under /console/profiles/templates.
+  .refine((s) => s !== "templates", "This slug is reserved");
 
 export const ProfileNameSchema = z.string().trim().min(1, "Give the profile a name").max(120, "Use at most 120 characters");
 
