@@ -123,6 +123,16 @@ export const verdicts = pgTable("verdicts", {
   index("verdicts_org_link_idx").on(t.organisationId, t.linkRef),
 ]);
 
+// Head of each organisation's verdict chain: appends update this one row (its row lock serialises them)
+// and insert their verdicts in the same statement, so storing a grading is a single round trip.
+export const verdictChainHeads = pgTable("verdict_chain_heads", {
+  organisationId: uuid("organisation_id").primaryKey().references(() => organisations.id, { onDelete: "cascade" }),
+  seq: bigint("seq", { mode: "number" }).notNull(),
+  digest: text("digest").notNull(),
+  // The head's digest before the latest append: the prev_digest of that append's first verdict.
+  prevDigest: text("prev_digest"),
+});
+
 export const callLog = pgTable("call_log", {
   id: bigserial("id", { mode: "number" }).primaryKey(),
   organisationId: uuid("organisation_id").references(() => organisations.id, { onDelete: "cascade" }),
