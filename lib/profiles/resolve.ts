@@ -1,6 +1,6 @@
-// Turns "slug" or "slug@version" into the profile the engine grades under: one of the organisation's
-// published versions (latest when no version is given) or a built-in template. An organisation profile
-// with the same slug as a template wins, because the organisation chose that name.
+// Turns "slug" or "slug@version" into the profile the engine grades under: a built-in template, or one
+// of the organisation's published versions (latest when no version is given). Templates are checked
+// first and cost no query: an organisation profile may not take a template's slug (lib/profiles/drafts).
 import type { Database } from "@/db";
 import { findPublishedVersion } from "@/db/queries/verdict-profile-lookup";
 import { findTemplate } from "@/lib/grading";
@@ -32,8 +32,6 @@ function parseStored(versionId: string, raw: { slug: string; name: string; versi
 export async function resolveProfile(db: Database, organisationId: string, ref: string): Promise<ResolvedProfile> {
   const parts = splitProfileRef(ref);
   if (!parts) return { ok: false, reason: `"${ref}" is not a profile reference (slug or slug@version)` };
-  const own = await findPublishedVersion(db, organisationId, parts.slug, parts.version);
-  if (own) return { ok: true, profile: parseStored(own.versionId, own), kind: "organisation" };
   const template = findTemplate(parts.slug) as Profile | undefined;
   if (template) {
     if (parts.version !== undefined && parts.version !== template.version) {
@@ -41,6 +39,8 @@ export async function resolveProfile(db: Database, organisationId: string, ref: 
     }
     return { ok: true, profile: template, kind: "template" };
   }
+  const own = await findPublishedVersion(db, organisationId, parts.slug, parts.version);
+  if (own) return { ok: true, profile: parseStored(own.versionId, own), kind: "organisation" };
   return {
     ok: false,
     reason:

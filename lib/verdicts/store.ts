@@ -1,22 +1,23 @@
-// Appends graded tests to the organisation's tamper-evident chain. Grading happens before, in memory;
-// here one transaction takes the organisation's chain lock, reads the head, and writes every test and
-// verdict with multi-row inserts, each verdict carrying seq + 1 and the digest of the one before it.
+// Appends graded tests to the organisation's tamper-evident chain. Grading and digests happen before, in
+// memory; storing is one statement (db/queries/verdicts.ts appendToChain) that advances the chain head
+// and writes every test and verdict, each verdict carrying the next seq and the digest before it.
 import { randomUUID } from "node:crypto";
-import type { Database } from "@/db";
+import { getPool, type Database } from "@/db";
 import type { StoredVerdict } from "@/db/schema";
-import { chainHead, insertTestsAndVerdicts, lockChain } from "@/db/queries/verdicts";
+import { appendToChain, type ChainItem } from "@/db/queries/verdicts";
 import { resultDigest } from "@/lib/grading";
 import type { GradingResult, LinkTest } from "@/lib/grading/schema";
 
 export interface GradedItem {
   test: LinkTest;
   result: GradingResult;
-  /** Defaults to the transaction's time; the demo seed back-dates its history. */
+  /** Defaults to the call's time; the demo seed back-dates its history. */
   createdAt?: Date;
 }
 
 export interface StoreContext {
-  db: Database;
+  /** Kept for callers' symmetry; the append runs on the process pool as one autocommitted statement. */
+  db?: Database;
   organisationId: string;
   apiKeyId?: string | null;
   userId?: string | null;
@@ -26,48 +27,44 @@ export interface StoreContext {
 export async function storeGradings(ctx: StoreContext, items: GradedItem[]): Promise<StoredVerdict[]> {
   if (items.length === 0) return [];
   const now = ctx.now ?? new Date();
-  // Digests are computed outside the lock: the lock should cover only what must be serial.
-  const prepared = items.map((it) => ({
-    ...it,
-    testId: randomUUID(),
+  const chainItems: ChainItem[] = items.map((it) => ({
     verdictId: randomUUID(),
+    testId: randomUUID(),
+    linkRef: it.test.link.ref,
+    input: it.test,
+    verdict: it.result.verdict,
+    headroomDb: it.result.headroomDb,
+    profileSlug: it.result.profile.slug,
+    profileVersion: it.result.profile.version,
+    engineVersion: it.result.engineVersion,
+    reasonCodes: [...new Set(it.result.reasons.map((r) => r.code))],
+    result: it.result,
     digest: resultDigest(it.result),
     createdAt: it.createdAt ?? now,
   }));
-  return ctx.db.transaction(async (tx) => {
-    await lockChain(tx, ctx.organisationId);
-    const head = await chainHead(tx, ctx.organisationId);
-    let seq = head?.seq ?? 0;
-    let prev: string | null = head?.digest ?? null;
-    const verdictRows: StoredVerdict[] = prepared.map((p) => {
-      seq += 1;
-      const row: StoredVerdict = {
-        id: p.verdictId,
-        organisationId: ctx.organisationId,
-        seq,
-        testId: p.testId,
-        linkRef: p.test.link.ref,
-        verdict: p.result.verdict,
-        headroomDb: p.result.headroomDb,
-        profileSlug: p.result.profile.slug,
-        profileVersion: p.result.profile.version,
-        engineVersion: p.result.engineVersion,
-        reasonCodes: [...new Set(p.result.reasons.map((r) => r.code))],
-        result: p.result,
-        digest: p.digest,
-        prevDigest: prev,
-        apiKeyId: ctx.apiKeyId ?? null,
-        userId: ctx.userId ?? null,
-        createdAt: p.createdAt,
-      };
-      prev = p.digest;
-      return row;
-    });
-    await insertTestsAndVerdicts(
-      tx,
-      prepared.map((p) => ({ id: p.testId, organisationId: ctx.organisationId, linkRef: p.test.link.ref, input: p.test, createdAt: p.createdAt })),
-      verdictRows,
-    );
-    return verdictRows;
+  const by = { apiKeyId: ctx.apiKeyId ?? null, userId: ctx.userId ?? null };
+  const placed = await appendToChain(getPool(), ctx.organisationId, chainItems, by);
+  return chainItems.map((c) => {
+    const p = placed.get(c.verdictId);
+    if (!p) throw new Error("chain append did not return every verdict");
+    return {
+      id: c.verdictId,
+      organisationId: ctx.organisationId,
+      seq: p.seq,
+      testId: c.testId,
+      linkRef: c.linkRef,
+      verdict: c.verdict,
+      headroomDb: c.headroomDb,
+      profileSlug: c.profileSlug,
+      profileVersion: c.profileVersion,
+      engineVersion: c.engineVersion,
+      reasonCodes: c.reasonCodes,
+      result: c.result,
+      digest: c.digest,
+      prevDigest: p.prevDigest,
+      apiKeyId: by.apiKeyId,
+      userId: by.userId,
+      createdAt: c.createdAt,
+    };
   });
 }

@@ -83,6 +83,15 @@ describe("POST /api/v1/gradings: success", () => {
     expect(rows[0].prevDigest).toBeNull();
     for (let i = 1; i < rows.length; i++) expect(rows[i].prevDigest).toBe(rows[i - 1].digest);
   });
+  it("starts a missing chain head from the verdicts already stored (e.g. after a restore)", async () => {
+    const { verdictChainHeads } = await import("@/db/schema");
+    const a = await call(POST, PATH, { key: key.secret, body: { test: passingTest("T-HEAD-A") } });
+    await getDb().delete(verdictChainHeads).where(eq(verdictChainHeads.organisationId, org.id));
+    const b = await call(POST, PATH, { key: key.secret, body: { test: passingTest("T-HEAD-B") } });
+    expect(b.status).toBe(201);
+    expect(b.json.seq).toBe(a.json.seq + 1);
+    expect(b.json.prevDigest).toBe(a.json.digest);
+  });
 });
 
 describe("POST /api/v1/gradings: bad input", () => {
