@@ -31,10 +31,19 @@ fi
 echo "[demo] building the app (log: .data/demo-build.log)"
 npx next build >.data/demo-build.log 2>&1 || { tail -40 .data/demo-build.log; exit 1; }
 
+demo_key="$(sed -n 's/.*sandbox API key (demo only): //p' .data/demo-seed.txt | tail -1)"
 cat <<MSG
 
   Glassgrade is starting at http://localhost:$PORT
-  Sign in at http://localhost:$PORT/console with any demo account above (password: glassgrade-demo).
+  Sign in at http://localhost:$PORT/console (password for every account: glassgrade-demo)
+    admin@northmere.example       admin      Northmere Fibre
+    engineer@northmere.example    engineer   Northmere Fibre
+    auditor@northmere.example     auditor    Northmere Fibre
+    developer@northmere.example   developer  Northmere Fibre
+    admin@calder.example          admin      Calder Splice & Test
+  Demo sandbox API key (Northmere, demo only): ${demo_key:-see .data/demo-seed.txt}
+    curl -s http://localhost:$PORT/api/v1/verdicts?limit=3 -H "Authorization: Bearer ${demo_key:-KEY}"
+  API reference: http://localhost:$PORT/docs/api    Mail sent by the app: http://localhost:$PORT/console/mailbox
   Stop with Ctrl-C; stop the database with: npm run db:stop
 
 MSG
