@@ -22,7 +22,7 @@ describe("API keys and call log in the console", () => {
 
   it("shows the admin's organisation, role and the full navigation", async () => {
     await expect(page.getByTestId("org-name").innerText()).resolves.toBe("Northmere Fibre");
-    await expect(page.getByTestId("role").innerText()).resolves.toBe("admin");
+    await expect(page.getByTestId("role").textContent()).resolves.toBe("admin");
     const nav = page.getByRole("navigation", { name: "Console" });
     for (const label of ["Overview", "API keys", "Call log", "Members", "Mailbox (dev)", "API reference"]) {
       await expect(nav.getByRole("link", { name: label }).count()).resolves.toBe(1);

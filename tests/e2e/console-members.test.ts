@@ -51,7 +51,7 @@ describe("members and invitations in Chromium", () => {
     await guest.close();
 
     const joined = await signIn(browser, email, "spool of dark fibre");
-    await expect(joined.getByTestId("role").innerText()).resolves.toBe("engineer");
+    await expect(joined.getByTestId("role").textContent()).resolves.toBe("engineer");
     await joined.close();
 
     // The link works once.
