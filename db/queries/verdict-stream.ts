@@ -74,10 +74,15 @@ async function fetchBatch(db: Database, o: VerdictStreamOptions, after: number |
   }));
 }
 
-export async function* streamVerdicts(db: Database, o: VerdictStreamOptions): AsyncGenerator<StreamedVerdict[]> {
+/** Keyset pagination over seq with one batch always in flight ahead of the consumer. */
+async function* keysetBatches<T extends { seq: number }>(
+  fetch: (after: number | null, size: number) => Promise<T[]>,
+  o: { limit?: number; batchSize?: number; afterSeq?: number },
+): AsyncGenerator<T[]> {
   const batchSize = o.batchSize ?? 1000;
   let remaining = o.limit ?? Number.POSITIVE_INFINITY;
-  let next = fetchBatch(db, o, o.afterSeq ?? null, Math.min(batchSize, remaining));
+  let next = fetch(o.afterSeq ?? null, Math.min(batchSize, remaining));
+  // A consumer that stops early never awaits the prefetch; keep its failure from going unhandled.
   next.catch(() => undefined);
   while (remaining > 0) {
     const rows = await next;
@@ -85,11 +90,42 @@ export async function* streamVerdicts(db: Database, o: VerdictStreamOptions): As
     remaining -= rows.length;
     const done = rows.length < batchSize || remaining <= 0;
     if (!done) {
-      next = fetchBatch(db, o, rows[rows.length - 1].seq, Math.min(batchSize, remaining));
-      // A consumer that stops early never awaits the prefetch; keep its failure from going unhandled.
+      next = fetch(rows[rows.length - 1].seq, Math.min(batchSize, remaining));
       next.catch(() => undefined);
     }
     yield rows;
     if (done) return;
   }
+}
+
+export function streamVerdicts(db: Database, o: VerdictStreamOptions): AsyncGenerator<StreamedVerdict[]> {
+  return keysetBatches((after, size) => fetchBatch(db, o, after, size), o);
+}
+
+/** Only what an impact preview reads: a lean row keeps the per-row decoding cost down. */
+export interface PreviewRow {
+  id: string;
+  seq: number;
+  linkRef: string;
+  verdict: "pass" | "marginal" | "fail";
+  headroomDb: number | null;
+  profileSlug: string;
+  profileVersion: number;
+  input: unknown;
+}
+
+export function streamPreviewRows(db: Database, o: Omit<VerdictStreamOptions, "order" | "withTest" | "withResult">): AsyncGenerator<PreviewRow[]> {
+  const f = { ...o, order: "newest" as const };
+  return keysetBatches(async (after, size) => {
+    const res = await db.execute(sql`
+      select v.seq, v.id, v.link_ref as "linkRef", v.verdict, v.headroom_db as "headroomDb",
+             v.profile_slug as "profileSlug", v.profile_version as "profileVersion", t.input
+      from verdicts v join tests t on t.id = v.test_id
+      where ${rangeFilter(f)} and ${after === null ? sql`true` : sql`v.seq < ${after}`}
+      order by v.seq desc
+      limit ${size}`);
+    const rows = res.rows as unknown as PreviewRow[];
+    for (const r of rows) r.seq = Number(r.seq);
+    return rows;
+  }, o);
 }

@@ -1,7 +1,7 @@
 // Impact preview: re-grade stored tests under a draft and count how verdicts would move. Tests stream
 // from the database in batches (db/queries/verdict-stream.ts); only counters and a capped list of changed
 // links are kept, so memory stays flat from a thousand tests to every test the organisation has.
-import { countVerdicts, streamVerdicts } from "@/db/queries/verdict-stream";
+import { countVerdicts, streamPreviewRows } from "@/db/queries/verdict-stream";
 import { findProfile, latestVersion } from "@/db/queries/profiles";
 import { grade } from "@/lib/grading";
 import { authorise, ConflictError, InvalidInputError, NotFoundError } from "./access";
@@ -89,7 +89,7 @@ export async function* previewImpact(
   let done = 0;
   yield { type: "progress", done, total };
 
-  for await (const batch of streamVerdicts(ctx.db, opts)) {
+  for await (const batch of streamPreviewRows(ctx.db, opts)) {
     if (signal?.aborted) return;
     for (const row of batch) {
       let result: ReturnType<typeof grade>;
