@@ -34,7 +34,8 @@ export function DataTable<T>({
     getRowId,
   });
   return (
-    <div className="overflow-x-auto rounded-md border border-ink-100 bg-white">
+    // `relative` keeps visually hidden (absolutely positioned) header labels inside the scroll box.
+    <div className="relative overflow-x-auto rounded-md border border-ink-100 bg-white">
       <table className="min-w-full text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-ink-50 text-xs uppercase tracking-wide text-ink-600">
@@ -75,7 +76,7 @@ export function DataTable<T>({
               className={cn(onRowClick && "cursor-pointer hover:bg-lumen-50 focus:bg-lumen-50", selectedRowId === row.id && "bg-lumen-50")}
             >
               {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className="whitespace-nowrap px-3 py-1.5 align-middle text-ink-800">
+                <td key={cell.id} className="px-3 py-1.5 align-middle text-ink-800">
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}
                 </td>
               ))}

@@ -52,8 +52,15 @@ export function KeysPanel({ initialKeys, canCreateLive, showsAllKeys }: { initia
       col.accessor("start", { header: "Key", cell: (c) => <code className="text-xs">{c.getValue()}</code> }),
       col.accessor("environment", { header: "Env", cell: (c) => <Badge tone={c.getValue() === "live" ? "accent" : "neutral"}>{c.getValue()}</Badge> }),
       col.accessor("scopes", { header: "Scopes", cell: (c) => <span className="text-xs">{c.getValue().join(", ")}</span> }),
-      ...(showsAllKeys ? [col.accessor("createdBy", { header: "Created by", cell: (c) => c.getValue() ?? "—" })] : []),
-      col.accessor("createdAt", { header: "Created", cell: (c) => formatDate(c.getValue()) }),
+      col.accessor("createdAt", {
+        header: "Created",
+        cell: (c) => (
+          <span className="whitespace-nowrap">
+            {formatDate(c.getValue())}
+            {showsAllKeys && <span className="block text-xs text-ink-600">{c.row.original.createdBy ?? "—"}</span>}
+          </span>
+        ),
+      }),
       col.accessor("lastUsedAt", { header: "Last used", cell: (c) => formatDateTime(c.getValue()) }),
       col.accessor("expiresAt", { header: "Expires", cell: (c) => formatDate(c.getValue()) }),
       col.accessor("status", { header: "Status", cell: (c) => <Badge tone={STATUS_TONE[c.getValue()]}>{c.getValue()}</Badge> }),

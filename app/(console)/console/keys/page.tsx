@@ -17,9 +17,11 @@ export default async function KeysPage() {
       <PageHeader
         title="API keys"
         description={
-          all
-            ? "Every key of your organisation. Systems send a key as `Authorization: Bearer <key>`. Sandbox keys (gg_sbx_) are for trying the API; live keys (gg_live_) grade real work."
-            : "The keys you created. Systems send a key as `Authorization: Bearer <key>`. Sandbox keys (gg_sbx_) are for trying the API; live keys (gg_live_) grade real work."
+          <>
+            {all ? "Every key of your organisation." : "The keys you created."} Systems send a key as{" "}
+            <code className="text-xs">Authorization: Bearer &lt;key&gt;</code>. Sandbox keys (<code className="text-xs">gg_sbx_</code>)
+            are for trying the API; live keys (<code className="text-xs">gg_live_</code>) grade real work.
+          </>
         }
       />
       <KeysPanel initialKeys={keys} canCreateLive={can(m.role, "keys:create-live")} showsAllKeys={all} />
