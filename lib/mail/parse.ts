@@ -24,7 +24,8 @@ function decodeQuotedPrintable(s: string): string {
 }
 
 function decodeWords(v: string): string {
-  return v.replace(/=\?([^?]+)\?([BbQq])\?([^?]*)\?=/g, (_m, _cs, enc: string, data: string) =>
+  // RFC 2047 section 6.2: white space between adjacent encoded-words is not part of the text.
+  return v.replace(/(\?=)\s+(?==\?)/g, "$1").replace(/=\?([^?]+)\?([BbQq])\?([^?]*)\?=/g, (_m, _cs, enc: string, data: string) =>
     enc.toUpperCase() === "B" ? Buffer.from(data, "base64").toString("utf8") : decodeQuotedPrintable(data.replace(/_/g, " ")),
   );
 }
