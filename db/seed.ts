@@ -5,6 +5,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { closeDb, getDb, type Database } from "./index";
 import { memberships, organisations, users, type Role } from "./schema";
 import { seedDemoApi } from "./seed-demo-gradings";
+import { seedDemoProfiles } from "./seed-demo-profiles";
 
 export const DEMO_PASSWORD = "glassgrade-demo";
 
@@ -46,6 +47,8 @@ export async function seed(db: Database) {
   const orgIds = await seedOrganisationsAndUsers(db);
   // Demo sandbox key and ~80 back-dated gradings for Northmere (db/seed-demo-gradings.ts).
   const api = await seedDemoApi(db, orgIds.northmere);
+  // A published organisation profile with two versions (db/seed-demo-profiles.ts).
+  await seedDemoProfiles(db, orgIds.northmere);
   return { orgIds, api };
 }
 
