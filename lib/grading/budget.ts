@@ -4,7 +4,7 @@
 // (TIA-568.3-D / ISO/IEC 14763-3 link-loss formula, from memory; see docs/grading.md).
 import { attenuationFor, type GradingContext } from "./context";
 import { round4 } from "./decide";
-import { SPLITTER_RATIO, type Limit, type TestMethod } from "./schema";
+import { SPLITTER_RATIO, type Limit, type Limits, type TestMethod } from "./schema";
 import { isConnectorLike, type Site } from "./sites";
 
 export interface Counts {
@@ -111,20 +111,7 @@ export function lossBudget(
   const splicesDb = counts.splices * limits.spliceLossDb.value;
   const marginDb = limits.designMarginDb.value;
 
-  const rules = [`limits.attenuation[${att.index}]`, "limits.connectorLossDb", "limits.spliceLossDb"];
-  const sources = [att.source, limits.connectorLossDb.source, limits.spliceLossDb.source];
-  if (endPairs > 0 && endLimit) {
-    rules.push("limits.endConnectionLossDb");
-    sources.push(endLimit.source);
-  }
-  if (counts.splitterOutputs.length > 0) {
-    rules.push("limits.splitterExcessLossDbPerStage");
-    sources.push(limits.splitterExcessLossDbPerStage.source);
-  }
-  if (marginDb !== 0) {
-    rules.push("limits.designMarginDb");
-    sources.push(limits.designMarginDb.source);
-  }
+  const cited = citation(limits, att.index, endPairs > 0 ? endLimit : undefined, counts.splitterOutputs.length > 0, marginDb !== 0);
 
   return {
     totalDb: round4(fibreDb + connectorsDb + splicesDb + splittersDb + marginDb),
@@ -138,7 +125,40 @@ export function lossBudget(
     splittersDb: round4(splittersDb),
     marginDb: round4(marginDb),
     countsFrom: counts.countsFrom,
-    rule: rules.join(" + "),
-    source: [...new Set(sources)].join("; "),
+    rule: cited.rule,
+    source: cited.source,
   };
+}
+
+// The rule path and sources of a budget depend only on which terms it uses; they are joined once per
+// profile and kept, since every graded wavelength needs them.
+const citations = new WeakMap<Limits, Map<string, { rule: string; source: string }>>();
+
+function citation(limits: Limits, attIndex: number, endLimit: Limit | undefined, splitters: boolean, margin: boolean) {
+  let byKey = citations.get(limits);
+  if (!byKey) {
+    byKey = new Map();
+    citations.set(limits, byKey);
+  }
+  const key = `${attIndex}|${endLimit ? (endLimit === limits.endConnectionLossDb?.multimode ? "m" : "s") : ""}|${splitters ? 1 : 0}|${margin ? 1 : 0}`;
+  let hit = byKey.get(key);
+  if (!hit) {
+    const rules = [`limits.attenuation[${attIndex}]`, "limits.connectorLossDb", "limits.spliceLossDb"];
+    const sources = [limits.attenuation[attIndex].source, limits.connectorLossDb.source, limits.spliceLossDb.source];
+    if (endLimit) {
+      rules.push("limits.endConnectionLossDb");
+      sources.push(endLimit.source);
+    }
+    if (splitters) {
+      rules.push("limits.splitterExcessLossDbPerStage");
+      sources.push(limits.splitterExcessLossDbPerStage.source);
+    }
+    if (margin) {
+      rules.push("limits.designMarginDb");
+      sources.push(limits.designMarginDb.source);
+    }
+    hit = { rule: rules.join(" + "), source: [...new Set(sources)].join("; ") };
+    byKey.set(key, hit);
+  }
+  return hit;
 }

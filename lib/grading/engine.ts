@@ -2,7 +2,7 @@
 // test and profile always give the same result.
 import { countComponents, type LengthChoice } from "./budget";
 import { addReason, createContext, fmt, type GradingContext } from "./context";
-import { decide, headroom, severityRank, worse } from "./decide";
+import { decide, headroom, worse } from "./decide";
 import { gradeEvents } from "./event-rules";
 import { gradeInspections, gradeLength, gradeOrl, gradePower, gradeSpectralLoss } from "./link-rules";
 import { gradeLoss, type ApplicationMatch, type PonMatch } from "./loss";
@@ -185,17 +185,22 @@ export function checkLengthLimit(
   });
 }
 
-const SEVERITY_ORDER = (r: Reason) => 2 - severityRank(r.severity);
+function severityOrder(r: Reason): number {
+  return r.severity === "fail" ? 0 : r.severity === "marginal" ? 1 : 2;
+}
+
+function compareReasons(a: Reason, b: Reason): number {
+  return (
+    severityOrder(a) - severityOrder(b) ||
+    (a.code < b.code ? -1 : a.code > b.code ? 1 : 0) ||
+    (a.wavelengthNm ?? 0) - (b.wavelengthNm ?? 0) ||
+    (a.positionM ?? -1) - (b.positionM ?? -1) ||
+    (a.measured ?? 0) - (b.measured ?? 0) ||
+    (a.message < b.message ? -1 : a.message > b.message ? 1 : 0)
+  );
+}
 
 /** Most severe first, then a stable order that does not depend on the order of the submitted events. */
 function sortReasons(reasons: Reason[]): Reason[] {
-  return reasons.sort(
-    (a, b) =>
-      SEVERITY_ORDER(a) - SEVERITY_ORDER(b) ||
-      (a.code < b.code ? -1 : a.code > b.code ? 1 : 0) ||
-      (a.wavelengthNm ?? 0) - (b.wavelengthNm ?? 0) ||
-      (a.positionM ?? -1) - (b.positionM ?? -1) ||
-      (a.measured ?? 0) - (b.measured ?? 0) ||
-      (a.message < b.message ? -1 : a.message > b.message ? 1 : 0),
-  );
+  return reasons.sort(compareReasons);
 }

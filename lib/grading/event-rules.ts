@@ -26,7 +26,8 @@ export function gradeEvents(ctx: GradingContext, sites: readonly Site[]): void {
       });
       continue;
     }
-    for (const [nm, r] of site.readings) {
+    for (const r of site.readings) {
+      const nm = r.wavelengthNm;
       reportGainer(ctx, site, nm, r);
       const loss = siteLoss(r);
       if (site.kind === "splitter") {
@@ -166,16 +167,21 @@ function reportGainer(ctx: GradingContext, site: Site, nm: number, r: SiteReadin
 // same at both (field practice; IEC 60793-1-47 specifies bend loss at 1550/1625 nm). Applied to
 // single-mode fibre, where the effect is the accepted signature.
 function macrobend(ctx: GradingContext, site: Site) {
-  if (ctx.multimode || site.kind === "splitter" || site.readings.size < 2) {
-    if (site.kind === "bend" && site.readings.size < 2) reportUnconfirmedBend(ctx, site);
+  if (ctx.multimode || site.kind === "splitter" || site.readings.length < 2) {
+    if (site.kind === "bend" && site.readings.length < 2) reportUnconfirmedBend(ctx, site);
     return;
   }
-  const entries = [...site.readings.entries()].filter(([, r]) => siteLoss(r) !== undefined);
+  // Readings are in ascending wavelength order, so j > i is the longer wavelength.
+  const rs = site.readings;
   let best: { short: number; long: number; diff: number; index: number } | undefined;
-  for (let i = 0; i < entries.length; i++) {
-    for (let j = i + 1; j < entries.length; j++) {
-      const diff = (siteLoss(entries[j][1]) as number) - (siteLoss(entries[i][1]) as number);
-      if (!best || diff > best.diff) best = { short: entries[i][0], long: entries[j][0], diff, index: entries[j][1].eventIndex };
+  for (let i = 0; i < rs.length; i++) {
+    const li = siteLoss(rs[i]);
+    if (li === undefined) continue;
+    for (let j = i + 1; j < rs.length; j++) {
+      const lj = siteLoss(rs[j]);
+      if (lj === undefined) continue;
+      const diff = lj - li;
+      if (!best || diff > best.diff) best = { short: rs[i].wavelengthNm, long: rs[j].wavelengthNm, diff, index: rs[j].eventIndex };
     }
   }
   if (!best) return;

@@ -4,7 +4,7 @@ import { addReason, attenuationFor, fmt, severityOf, type GradingContext } from 
 import { decide, headroom, round4 } from "./decide";
 import type { PonMatch } from "./loss";
 import type { WavelengthResult } from "./schema";
-import { siteLoss, type Site } from "./sites";
+import { siteLoss, type Site, type SiteReading } from "./sites";
 
 /** Single-mode fibre loses less at 1550 nm than at 1310 nm; a link that loses clearly more at the
  *  longer wavelength is bent somewhere (field practice, seen in secondary sources). */
@@ -33,6 +33,9 @@ export function gradeSpectralLoss(ctx: GradingContext, wavelengths: readonly Wav
     message: `The link loses ${fmt(best.diff)} dB more at ${best.long.wavelengthNm} nm than at ${best.short.wavelengthNm} nm; fibre alone loses less at the longer wavelength, so a bend is likely. Locate it with an OTDR.`,
   });
 }
+
+/** x dB as a power ratio is exp(x * ln(10) / 10). */
+const DB_TO_LN = Math.LN10 / 10;
 
 export function gradeOrl(ctx: GradingContext, sites: readonly Site[], endM: number | undefined): void {
   const family = ctx.multimode ? "multimode" : "singlemode";
@@ -82,22 +85,25 @@ function orlConsistency(ctx: GradingContext, sites: readonly Site[], nm: number,
   const family = ctx.multimode ? "multimode" : "singlemode";
   const att = attenuationFor(ctx.limits, ctx.fibre, nm);
   if (!att || lengthM === undefined) return;
-  const reflections: { d: number; r: number; loss: number }[] = [];
-  for (const s of sites) {
-    const reading = s.readings.get(nm);
-    if (!reading) continue;
-    const d = direction === "AB" ? s.positionM : lengthM - s.positionM;
-    reflections.push({ d: Math.max(0, d), r: reading.reflectanceDb ?? -Infinity, loss: Math.max(0, siteLoss(reading) ?? 0) });
-  }
-  if (!reflections.some((x) => Number.isFinite(x.r))) return;
-  reflections.sort((a, b) => a.d - b.d);
+  // Sites are in position order from end A; walk them from the launch end of this measurement.
   let power = 0;
   let upstreamLoss = 0;
-  for (const x of reflections) {
-    const oneWay = upstreamLoss + (att.value * x.d) / 1000;
-    if (Number.isFinite(x.r)) power += 10 ** ((x.r - 2 * oneWay) / 10);
-    upstreamLoss += x.loss;
+  let anyReflection = false;
+  const n = sites.length;
+  for (let k = 0; k < n; k++) {
+    const s = sites[direction === "AB" ? k : n - 1 - k];
+    let reading: SiteReading | undefined;
+    for (const r of s.readings) if (r.wavelengthNm === nm) reading = r;
+    if (!reading) continue;
+    const d = Math.max(0, direction === "AB" ? s.positionM : lengthM - s.positionM);
+    if (reading.reflectanceDb !== undefined) {
+      anyReflection = true;
+      const oneWay = upstreamLoss + (att.value * d) / 1000;
+      power += Math.exp((reading.reflectanceDb - 2 * oneWay) * DB_TO_LN);
+    }
+    upstreamLoss += Math.max(0, siteLoss(reading) ?? 0);
   }
+  if (!anyReflection) return;
   const backscatterRl = ctx.limits.orlConsistency.backscatterReturnLossDb[family];
   power += 10 ** (-backscatterRl.value / 10) * (1 - 10 ** ((-2 * att.value * lengthM) / 1000 / 10));
   const implied = round4(-10 * Math.log10(power));

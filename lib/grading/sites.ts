@@ -5,6 +5,7 @@
 import type { EventKind, LinkEvent } from "./schema";
 
 export interface SiteReading {
+  wavelengthNm: number;
   /** Loss per direction (worst of duplicates); undefined when that direction did not report one. */
   ab?: number;
   ba?: number;
@@ -18,8 +19,8 @@ export interface Site {
   positionM: number;
   kind: EventKind;
   firstIndex: number;
-  /** Readings keyed by wavelength, in ascending wavelength order. */
-  readings: Map<number, SiteReading>;
+  /** One reading per wavelength, in ascending wavelength order. */
+  readings: SiteReading[];
 }
 
 // When one feature is labelled differently per wavelength or direction, the most telling label wins:
@@ -54,24 +55,23 @@ function cmp(a: string, b: string): number {
 
 export function groupSites(events: readonly LinkEvent[], toleranceM: number): Site[] {
   const order = events.map((_, i) => i);
-  order.sort((i, j) => compareEvents(events[i], events[j]) || i - j);
+  // Instruments usually list events in position order already; sorting is then skipped, which
+  // gives the same order the sort would (ties keep their submitted order either way).
+  let sorted = true;
+  for (let k = 1; k < events.length && sorted; k++) sorted = compareEvents(events[k - 1], events[k]) <= 0;
+  if (!sorted) order.sort((i, j) => compareEvents(events[i], events[j]) || i - j);
   const sites: Site[] = [];
   let current: Site | undefined;
   for (const i of order) {
     const e = events[i];
     if (!current || e.positionM - current.positionM > toleranceM) {
-      current = { positionM: e.positionM, kind: e.kind, firstIndex: i, readings: new Map() };
+      current = { positionM: e.positionM, kind: e.kind, firstIndex: i, readings: [] };
       sites.push(current);
     }
     if (KIND_PRIORITY[e.kind] > KIND_PRIORITY[current.kind]) current.kind = e.kind;
     if (i < current.firstIndex) current.firstIndex = i;
-    let r = current.readings.get(e.wavelengthNm);
-    if (!r) {
-      r = { eventIndex: i };
-      current.readings.set(e.wavelengthNm, r);
-    } else if (i < r.eventIndex) {
-      r.eventIndex = i;
-    }
+    const r = readingAt(current.readings, e.wavelengthNm, i);
+    if (i < r.eventIndex) r.eventIndex = i;
     if (e.lossDb !== undefined) {
       if (e.direction === "BA") r.ba = r.ba === undefined ? e.lossDb : Math.max(r.ba, e.lossDb);
       else r.ab = r.ab === undefined ? e.lossDb : Math.max(r.ab, e.lossDb);
@@ -80,11 +80,22 @@ export function groupSites(events: readonly LinkEvent[], toleranceM: number): Si
       r.reflectanceDb = r.reflectanceDb === undefined ? e.reflectanceDb : Math.max(r.reflectanceDb, e.reflectanceDb);
     }
   }
-  // Readings were inserted in position order; rebuild each map in wavelength order for stable output.
-  for (const s of sites) {
-    if (s.readings.size > 1) s.readings = new Map([...s.readings.entries()].sort((a, b) => a[0] - b[0]));
-  }
   return sites;
+}
+
+/** The reading for one wavelength, created in wavelength order if missing (a site has only a few). */
+function readingAt(readings: SiteReading[], wavelengthNm: number, index: number): SiteReading {
+  let k = 0;
+  while (k < readings.length && readings[k].wavelengthNm < wavelengthNm) k++;
+  if (k < readings.length && readings[k].wavelengthNm === wavelengthNm) return readings[k];
+  const r: SiteReading = { wavelengthNm, eventIndex: index };
+  readings.splice(k, 0, r);
+  return r;
+}
+
+export function readingFor(site: Site, wavelengthNm: number): SiteReading | undefined {
+  for (const r of site.readings) if (r.wavelengthNm === wavelengthNm) return r;
+  return undefined;
 }
 
 /**
@@ -100,7 +111,7 @@ export function siteLoss(r: SiteReading): number | undefined {
 export function isConnectorLike(site: Site): boolean {
   if (site.kind === "connector" || site.kind === "reflective") return true;
   if (site.kind !== "unknown") return false;
-  for (const r of site.readings.values()) if (r.reflectanceDb !== undefined) return true;
+  for (const r of site.readings) if (r.reflectanceDb !== undefined) return true;
   return false;
 }
 

@@ -64,3 +64,19 @@ describe("SHA-256 (FIPS 180-4)", () => {
     expect(resultDigest(v)).toBe(createHash("sha256").update(canonicalize(v)!, "utf8").digest("hex"));
   });
 });
+
+describe("message number formatting", () => {
+  it("prints the same digits as String(Math.round(x * 1000) / 1000)", async () => {
+    const { fmt } = await import("@/lib/grading/context");
+    fc.assert(
+      fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), (x) => {
+        const expected = String(Math.round(x * 1000) / 1000 + 0);
+        expect(fmt(x)).toBe(expected === "-0" ? "0" : expected);
+      }),
+      { numRuns: 5000 },
+    );
+    expect(fmt(15.0515)).toBe("15.052");
+    expect(fmt(-0.0004)).toBe("0");
+    expect(fmt(2.1)).toBe("2.1");
+  });
+});
