@@ -36,7 +36,8 @@ async function main() {
   const { organisations, users, memberships } = await import("../../db/schema");
   const { eq, sql } = await import("drizzle-orm");
   const { findTemplate, grade } = await import("../../lib/grading");
-  const { storeGradings } = await import("../../lib/verdicts/store");
+  const { bulkAppendGraded } = await import("../../db/queries/bulk-load");
+  const { resultDigest } = await import("../../lib/grading");
   const { syntheticLinkTest, seededRandom } = await import("../../tests/helpers/synthetic-links");
   const { cloneTemplate, saveDraft } = await import("../../lib/profiles/drafts");
   const { draftProfileFor, previewImpact } = await import("../../lib/profiles/impact-preview");
@@ -64,14 +65,16 @@ async function main() {
     console.log(`[bench] seeding ${COUNT.toLocaleString("en-GB")} graded tests into ${DB_NAME} (once)…`);
     const rand = seededRandom(2026);
     const t0 = performance.now();
-    for (let i = 0; i < COUNT; i += 2000) {
+    const start = Date.now() - COUNT * 1000;
+    for (let i = 0; i < COUNT; i += 5000) {
       const items = [];
-      for (let j = i; j < Math.min(COUNT, i + 2000); j++) {
+      for (let j = i; j < Math.min(COUNT, i + 5000); j++) {
         const test = syntheticLinkTest(j, rand);
-        items.push({ test, result: grade(test, template) });
+        const result = grade(test, template);
+        items.push({ linkRef: test.link.ref, input: test, result, digest: resultDigest(result), createdAt: new Date(start + j * 1000) });
       }
-      await storeGradings({ db, organisationId: org.id }, items);
-      if ((i / 2000) % 10 === 0) process.stdout.write(`\r[bench] seeded ${(i + items.length).toLocaleString("en-GB")}`);
+      await bulkAppendGraded(db, org.id, items);
+      process.stdout.write(`\r[bench] seeded ${(i + items.length).toLocaleString("en-GB")}`);
     }
     console.log(`\n[bench] seeded in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
   }
