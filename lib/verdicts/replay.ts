@@ -2,7 +2,8 @@
 // also grade it under another profile version to show what would change. Writes nothing.
 import type { Database } from "@/db";
 import { findVerdictWithInput } from "@/db/queries/verdicts";
-import { ENGINE_VERSION, grade, resultDigest } from "@/lib/grading";
+import { ENGINE_VERSION, grade } from "@/lib/grading";
+import { verdictDigest } from "./digest";
 import { LinkTestSchema, type GradingResult } from "@/lib/grading/schema";
 import type { ReplayResult } from "@/lib/api/schemas/verdicts";
 import { resolveProfile } from "@/lib/profiles/resolve";
@@ -40,14 +41,14 @@ export async function replayVerdict(
   }
   const test = LinkTestSchema.parse(input);
   const again = grade(test, original.profile);
-  const replayDigest = resultDigest(again);
+  const replayDigest = verdictDigest(again);
 
   let comparison: ReplayResult["comparison"];
   if (compareWith) {
     const other = await resolveProfile(db, organisationId, compareWith);
     if (!other.ok) return { ok: false, code: "comparison_profile", detail: other.reason };
     const alt = grade(test, other.profile);
-    const o = outcome(alt, resultDigest(alt));
+    const o = outcome(alt, verdictDigest(alt));
     const before = new Set(outcome(stored, verdict.digest).reasonCodes);
     const after = new Set(o.reasonCodes);
     const reasonsAdded = [...after].filter((c) => !before.has(c));

@@ -5,7 +5,7 @@ import { randomUUID } from "node:crypto";
 import { getPool, type Database } from "@/db";
 import type { StoredVerdict } from "@/db/schema";
 import { appendToChain, type ChainItem } from "@/db/queries/verdicts";
-import { resultDigest } from "@/lib/grading";
+import { verdictDigest } from "./digest";
 import type { GradingResult, LinkTest } from "@/lib/grading/schema";
 
 export interface GradedItem {
@@ -39,7 +39,7 @@ export async function storeGradings(ctx: StoreContext, items: GradedItem[]): Pro
     engineVersion: it.result.engineVersion,
     reasonCodes: [...new Set(it.result.reasons.map((r) => r.code))],
     result: it.result,
-    digest: resultDigest(it.result),
+    digest: verdictDigest(it.result),
     createdAt: it.createdAt ?? now,
   }));
   const by = { apiKeyId: ctx.apiKeyId ?? null, userId: ctx.userId ?? null };
