@@ -52,11 +52,17 @@ export function buildMarkers(test: LinkTest, result: GradingResult): Marker[] {
     const prev = worst.get(r.eventIndex);
     if (r.severity === "fail" || !prev) worst.set(r.eventIndex, r.severity);
   }
-  const byPlace = new Map<string, Marker>();
-  (test.events ?? []).forEach((e, i) => {
-    // Within half a metre counts as the same place: OTDR positions of one event differ slightly by wavelength.
-    const key = `${e.kind}@${Math.round(e.positionM * 2) / 2}`;
-    const m = byPlace.get(key) ?? { positionM: e.positionM, kind: e.kind, lines: [], severity: "ok" as Severity, eventIndexes: [] };
+  // Readings of one event at several wavelengths differ a little in position (OTDR resolution, group
+  // index); the same kind within a few metres counts as one place.
+  const tolerance = Math.max(2, linkLengthM(test) * 0.001);
+  const markers: Marker[] = [];
+  const order = (test.events ?? []).map((e, i) => ({ e, i })).sort((a, b) => a.e.positionM - b.e.positionM);
+  for (const { e, i } of order) {
+    let m = markers.find((x) => x.kind === e.kind && Math.abs(x.positionM - e.positionM) <= tolerance);
+    if (!m) {
+      m = { positionM: e.positionM, kind: e.kind, lines: [], severity: "ok", eventIndexes: [] };
+      markers.push(m);
+    }
     const parts = [`${e.wavelengthNm} nm${e.direction ? ` ${e.direction}` : ""}`];
     if (e.lossDb !== undefined) parts.push(`loss ${e.lossDb.toFixed(2)} dB`);
     if (e.reflectanceDb !== undefined) parts.push(`reflectance ${e.reflectanceDb.toFixed(1)} dB`);
@@ -64,9 +70,8 @@ export function buildMarkers(test: LinkTest, result: GradingResult): Marker[] {
     m.eventIndexes.push(i);
     const s = worst.get(i);
     if (s === "fail" || (s === "marginal" && m.severity === "ok")) m.severity = s;
-    byPlace.set(key, m);
-  });
-  return [...byPlace.values()].sort((a, b) => a.positionM - b.positionM);
+  }
+  return markers.sort((a, b) => a.positionM - b.positionM);
 }
 
 export function linkLengthM(test: LinkTest): number {
