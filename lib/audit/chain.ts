@@ -3,7 +3,7 @@
 // columns the console filters on must agree with the result they were copied from. The first row that
 // fails any of these is named.
 import { streamVerdicts, type StreamedVerdict } from "@/db/queries/verdict-stream";
-import { resultDigest } from "@/lib/grading";
+import { verdictDigest } from "@/lib/verdicts/digest";
 import { authorise } from "@/lib/profiles/access";
 import type { ProfileContext } from "@/lib/profiles/context";
 
@@ -58,7 +58,7 @@ export function checkLink(row: StreamedVerdict, previous: { seq: number; digest:
   if ((row.prevDigest ?? null) !== expectedPrev) {
     return { ...at, problem: "prev_digest_mismatch", detail: `points at ${row.prevDigest ?? "nothing"} but the previous verdict's digest is ${expectedPrev ?? "nothing"}` };
   }
-  const recomputed = resultDigest(row.result as Parameters<typeof resultDigest>[0]);
+  const recomputed = verdictDigest(row.result);
   if (recomputed !== row.digest) {
     return { ...at, problem: "digest_mismatch", detail: `the stored result hashes to ${recomputed}, not to the stored digest ${row.digest}` };
   }

@@ -2,7 +2,8 @@
 // the verdict is reproduced byte for byte; otherwise the stored and replayed results are compared field by field.
 import { sql } from "drizzle-orm";
 import { countVerdicts, streamVerdicts, type StreamedVerdict } from "@/db/queries/verdict-stream";
-import { ENGINE_VERSION, grade, resultDigest } from "@/lib/grading";
+import { ENGINE_VERSION, grade } from "@/lib/grading";
+import { verdictDigest } from "@/lib/verdicts/digest";
 import { authorise, InvalidInputError, NotFoundError } from "@/lib/profiles/access";
 import type { ProfileContext } from "@/lib/profiles/context";
 import { diffJson, type LimitChange } from "@/lib/profiles/diff";
@@ -42,10 +43,10 @@ async function replayRow(row: StreamedVerdict, profiles: StoredProfileCache): Pr
   } catch (err) {
     return { ...base, status: "unavailable", differences: [], problem: `The engine refused the stored test: ${(err as Error).message}` };
   }
-  const replayedDigest = resultDigest(replayed);
+  const replayedDigest = verdictDigest(replayed);
   // Reproduced means the replay matches the stored digest and the stored result still hashes to it; a
   // result rewritten behind the digest's back is reported with its differences, not waved through.
-  const storedIntact = resultDigest(row.result as Parameters<typeof resultDigest>[0]) === row.digest;
+  const storedIntact = verdictDigest(row.result) === row.digest;
   if (replayedDigest === row.digest && storedIntact) return { ...base, status: "reproduced", replayedDigest, differences: [] };
   return {
     ...base,
