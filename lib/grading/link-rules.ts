@@ -109,30 +109,18 @@ function orlConsistency(ctx: GradingContext, sites: readonly Site[], nm: number,
   const implied = round4(-10 * Math.log10(power));
   const tol = ctx.limits.orlConsistency.toleranceDb.value;
   const tolSource = `${ctx.limits.orlConsistency.toleranceDb.source}; ${backscatterRl.source}`;
+  const note = (code: string, message: string) =>
+    addReason(ctx, { code, severity: "info", wavelengthNm: nm, measured: orlDb, limit: implied, unit: "dB", rule: "limits.orlConsistency", source: tolSource, message });
   if (orlDb > implied + tol) {
-    addReason(ctx, {
-      code: "orl.inconsistent",
-      severity: "info",
-      wavelengthNm: nm,
-      measured: orlDb,
-      limit: implied,
-      unit: "dB",
-      rule: "limits.orlConsistency",
-      source: tolSource,
-      message: `Reported ORL ${fmt(orlDb)} dB at ${nm} nm is higher than the ${fmt(implied)} dB that the listed reflections and backscatter alone imply: check the ORL reading or the event reflectances.`,
-    });
+    note(
+      "orl.inconsistent",
+      `Reported ORL ${fmt(orlDb)} dB at ${nm} nm is higher than the ${fmt(implied)} dB that the listed reflections and backscatter alone imply: check the ORL reading or the event reflectances.`,
+    );
   } else if (orlDb < implied - tol) {
-    addReason(ctx, {
-      code: "orl.unlisted-reflection",
-      severity: "info",
-      wavelengthNm: nm,
-      measured: orlDb,
-      limit: implied,
-      unit: "dB",
-      rule: "limits.orlConsistency",
-      source: tolSource,
-      message: `Reported ORL ${fmt(orlDb)} dB at ${nm} nm is well below the ${fmt(implied)} dB the listed events imply: a reflection is missing from the event list (dead zone, far-end connector or an open end).`,
-    });
+    note(
+      "orl.unlisted-reflection",
+      `Reported ORL ${fmt(orlDb)} dB at ${nm} nm is well below the ${fmt(implied)} dB the listed events imply: a reflection is missing from the event list (dead zone, far-end connector or an open end).`,
+    );
   }
 }
 

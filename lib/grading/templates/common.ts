@@ -78,6 +78,18 @@ export const TIA_SPLICE_REFLECTANCE: NonNullable<Limits["spliceReflectanceMaxDb"
   singlemode: { value: -35, source: "ANSI/TIA-568.3-D splice return loss at least 35 dB, single-mode (from memory)" },
 };
 
+/** The limits every template shares: decision rule, guard bands, tolerances and the consistency model. */
+export const SHARED_LIMITS = {
+  decisionRule: SIMPLE_RULE,
+  splitterExcessLossDbPerStage: SPLITTER_EXCESS,
+  designMarginDb: NO_MARGIN,
+  orlConsistency: ORL_CONSISTENCY,
+  lengthTolerance: LENGTH_TOLERANCE,
+  eventPositionToleranceM: EVENT_POSITION_TOLERANCE,
+  macrobendThresholdDb: MACROBEND_THRESHOLD,
+  guardBands: GUARD_BANDS,
+} satisfies Partial<Limits>;
+
 const MM = ["OM1", "OM2", "OM3", "OM4", "OM5"] as const;
 const OM3_UP = ["OM3", "OM4", "OM5"] as const;
 const OM4_UP = ["OM4", "OM5"] as const;

@@ -12,7 +12,7 @@ export const isoIec11801: Profile = {
   description:
     "Cabled fibre attenuation of ISO/IEC 11801-1 (OM1-OM5, OS1a, OS2) and the reference-grade end-connection allowances of ISO/IEC 14763-3, with IEEE 802.3 application limits.",
   limits: {
-    decisionRule: c.SIMPLE_RULE,
+    ...c.SHARED_LIMITS,
     attenuation: [
       { fibreTypes: [...c.MULTIMODE_FIBRES], wavelengthNm: 850, maxDbPerKm: 3.5, source: `${ISO_ATT}, 3.5 dB/km at 850 nm (from memory)` },
       { fibreTypes: ["OM5"], wavelengthNm: 953, maxDbPerKm: 2.3, source: "TIA-492AAAE / IEC 60793-2-10 A1a.4 OM5 at 953 nm (from memory)" },
@@ -39,8 +39,6 @@ export const isoIec11801: Profile = {
       singlemode: { value: 0.5, source: "ISO/IEC 14763-3 reference-grade to standard-grade connection, single-mode 0.5 dB (from memory)" },
     },
     spliceLossDb: { value: 0.3, source: "ISO/IEC 11801-1 splice 0.3 dB (from memory)" },
-    splitterExcessLossDbPerStage: c.SPLITTER_EXCESS,
-    designMarginDb: c.NO_MARGIN,
     reflectanceMaxDb: {
       multimode: { value: -20, source: "ISO/IEC 11801-1 connection return loss at least 20 dB, multimode (from memory)" },
       upc: { value: -35, source: "ISO/IEC 11801-1 connection return loss at least 35 dB, single-mode (from memory)" },
@@ -48,11 +46,6 @@ export const isoIec11801: Profile = {
     },
     spliceReflectanceMaxDb: c.TIA_SPLICE_REFLECTANCE,
     orlMinDb: {},
-    orlConsistency: c.ORL_CONSISTENCY,
-    lengthTolerance: c.LENGTH_TOLERANCE,
-    eventPositionToleranceM: c.EVENT_POSITION_TOLERANCE,
-    macrobendThresholdDb: c.MACROBEND_THRESHOLD,
-    guardBands: c.GUARD_BANDS,
     applications: c.IEEE_APPLICATIONS,
     ponClasses: [],
   },

@@ -15,12 +15,10 @@ const PON_ATTENUATION: Limits["attenuation"] = [
 
 function ponLimits(ponClasses: Limits["ponClasses"], defaultPonClass: string, standard: string): Limits {
   return {
-    decisionRule: c.SIMPLE_RULE,
+    ...c.SHARED_LIMITS,
     attenuation: PON_ATTENUATION,
     connectorLossDb: { value: 0.5, source: "ITU-T G.671 connection loss 0.5 dB used in ITU planning (seen, as cited by a trade-association article)" },
     spliceLossDb: { value: 0.15, source: "FOA Reference Guide planning value for single-mode splices, 0.15 dB (trade association, seen)" },
-    splitterExcessLossDbPerStage: c.SPLITTER_EXCESS,
-    designMarginDb: c.NO_MARGIN,
     reflectanceMaxDb: {
       multimode: c.TIA_REFLECTANCE.multimode,
       upc: { value: -35, source: `${standard} maximum discrete reflectance between S and R, -35 dB (ITU-T G.984.2 cl. 8.2.7.3; clause seen, value from memory)` },
@@ -29,11 +27,6 @@ function ponLimits(ponClasses: Limits["ponClasses"], defaultPonClass: string, st
     orlMinDb: {
       singlemode: { value: 32, source: `${standard} minimum ODN optical return loss 32 dB (ITU-T G.984.2 cl. 8.2.7.2; clause seen, value from memory)` },
     },
-    orlConsistency: c.ORL_CONSISTENCY,
-    lengthTolerance: c.LENGTH_TOLERANCE,
-    eventPositionToleranceM: c.EVENT_POSITION_TOLERANCE,
-    macrobendThresholdDb: c.MACROBEND_THRESHOLD,
-    guardBands: c.GUARD_BANDS,
     applications: [],
     ponClasses,
     defaultPonClass,

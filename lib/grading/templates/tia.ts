@@ -19,20 +19,13 @@ function singlemodeAttenuation(dbPerKm: number, source: string): Limits["attenua
 
 function tiaLimits(attenuation: Limits["attenuation"]): Limits {
   return {
-    decisionRule: c.SIMPLE_RULE,
+    ...c.SHARED_LIMITS,
     attenuation,
     connectorLossDb: c.TIA_CONNECTOR_LOSS,
     spliceLossDb: c.TIA_SPLICE_LOSS,
-    splitterExcessLossDbPerStage: c.SPLITTER_EXCESS,
-    designMarginDb: c.NO_MARGIN,
     reflectanceMaxDb: c.TIA_REFLECTANCE,
     spliceReflectanceMaxDb: c.TIA_SPLICE_REFLECTANCE,
     orlMinDb: {},
-    orlConsistency: c.ORL_CONSISTENCY,
-    lengthTolerance: c.LENGTH_TOLERANCE,
-    eventPositionToleranceM: c.EVENT_POSITION_TOLERANCE,
-    macrobendThresholdDb: c.MACROBEND_THRESHOLD,
-    guardBands: c.GUARD_BANDS,
     applications: c.IEEE_APPLICATIONS,
     ponClasses: [],
   };
