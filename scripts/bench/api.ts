@@ -10,6 +10,7 @@
 // Figures are ratios within one run on one machine, never absolute promises.
 import { execFileSync, spawn } from "node:child_process";
 import { existsSync } from "node:fs";
+import os from "node:os";
 import path from "node:path";
 import autocannon, { type Result } from "autocannon";
 import { count, eq, inArray } from "drizzle-orm";
@@ -135,6 +136,8 @@ async function main() {
     const totalResponses = health["2xx"] + health.non2xx + grading["2xx"] + grading.non2xx;
     const ratio = grading.requests.average / health.requests.average;
     console.log(`\nGlassgrade API benchmark: ${CONNECTIONS} connections, ${REQUESTS} requests per route, node ${process.version}, ${DIST}`);
+    // Other work on the machine slows both routes; the ratios are what carry over between machines.
+    console.log(`machine: ${os.cpus().length} cores, load average ${os.loadavg().map((l) => l.toFixed(1)).join(" / ")}`);
     console.log(line("GET  /api/v1/health", health));
     console.log(line("POST /api/v1/gradings", grading));
     console.log(`grading / health throughput: ${ratio.toFixed(2)} (goal >= 0.60) ${ratio >= 0.6 ? "MET" : "NOT MET"}`);
