@@ -114,7 +114,7 @@ export const IEEE_APPLICATIONS: AppRow[] = [
   app("1000BASE-SX", ["OM2", ...OM3_UP], 850, 3.43, "IEEE 802.3 Table 38-6, 50 um 500 MHz.km (from memory); OM3-OM5 meet that row's bandwidth (common practice)", 550, "IEEE 802.3 Table 38-2, 550 m on 50 um 500 MHz.km (seen in a secondary source)"),
   app("1000BASE-LX", MM, 1300, 2.35, "IEEE 802.3 Table 38-10, multimode with mode-conditioning cord (from memory)", 550, "IEEE 802.3 Table 38-10 (from memory)"),
   app("1000BASE-LX", SM, 1310, 4.56, "IEEE 802.3 Table 38-10, single-mode (from memory)", 5000, "IEEE 802.3 Table 38-10 (from memory)"),
-  app("10GBASE-SR", ["OM1"], 850, 1.6, "IEEE 802.3 Clause 52, 62.5 um 200 MHz.km (from memory, low confidence)", 33, "IEEE 802.3 Clause 52 (from memory, low confidence)"),
+  app("10GBASE-SR", ["OM1"], 850, 1.6, "IEEE 802.3 Clause 52, 62.5 um 200 MHz.km, 1.6 dB (from memory, low confidence; an appliance installation guide lists 1.5 dB / 33 m on OM1, seen)", 33, "IEEE 802.3 Clause 52, 33 m on OM1 (from memory; the same 33 m seen in an appliance installation guide)"),
   app("10GBASE-SR", ["OM2"], 850, 1.8, "IEEE 802.3 Clause 52, 50 um 500 MHz.km (from memory, low confidence)", 82, "IEEE 802.3 Clause 52 (from memory, low confidence)"),
   app("10GBASE-SR", ["OM3"], 850, 2.6, "IEEE 802.3 Clause 52 (from memory)", 300, "IEEE 802.3 Clause 52, 300 m on OM3 (seen, Ethernet Alliance)"),
   app("10GBASE-SR", OM4_UP, 850, 2.9, "IEEE 802.3 Clause 52, 2.9 dB on OM4 (seen in a secondary source)", 400, "IEEE 802.3-2012 Clause 52, 400 m on OM4 (seen, Ethernet Alliance)"),
