@@ -12,7 +12,6 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { performance } from "node:perf_hooks";
 import { pathToFileURL } from "node:url";
-import { build } from "esbuild";
 import * as engine from "../../lib/grading";
 import { findTemplate, LinkTestSchema, type GradingResult, type LinkTest, type Profile } from "../../lib/grading";
 
@@ -100,7 +99,16 @@ function measure(grade: Grade, tests: LinkTest[], profiles: Profile[]): { gradeM
 }
 
 /** The engine bundled into a single ES module, loaded from a temporary file. */
-async function bundledGrade(): Promise<Grade> {
+// esbuild arrives with tsx (and vite); it is not a direct dependency, so its absence only skips the
+// bundled figure.
+async function bundledGrade(): Promise<Grade | undefined> {
+  let build: typeof import("esbuild").build;
+  try {
+    ({ build } = await import("esbuild"));
+  } catch {
+    console.log("esbuild is not installed: the bundled figure is skipped");
+    return undefined;
+  }
   const out = await build({
     entryPoints: [path.join(import.meta.dirname ?? __dirname, "../../lib/grading/index.ts")],
     bundle: true,
@@ -144,9 +152,12 @@ async function main() {
 
   console.log(`tests: ${tests.length} (2 wavelengths, 4-20 events each), median of ${ROUNDS} interleaved rounds, node ${process.version}`);
   run("engine as loaded by tsx (one CommonJS module per file)", engine.grade, tests, profiles);
-  const bundled = run("engine bundled into one module (as next build ships it)", await bundledGrade(), tests, profiles);
+  const bundledEngine = await bundledGrade();
+  if (bundledEngine) {
+    const bundled = run("engine bundled into one module (as next build ships it)", bundledEngine, tests, profiles);
+    console.log(`goal (bundled ratio <= 1.00): ${bundled <= 1 ? "met" : "not met"}`);
+  }
   if (sink === -1) console.log("unreachable"); // keeps the work observable to the optimiser
-  console.log(`goal (bundled ratio <= 1.00): ${bundled <= 1 ? "met" : "not met"}`);
 }
 
 main().catch((err) => {
