@@ -25,13 +25,17 @@ export function grade(test: LinkTest, profile: Profile): GradingResult {
           ? { lengthM: endM, basis: "events" }
           : { lengthM: 0, basis: "none" };
 
-  if (counts.countsFrom === "events" && (test.link.connectorPairs === undefined || test.link.splices === undefined)) {
+  const fromEvents = [
+    test.link.connectorPairs === undefined ? `${counts.connectorPairs} connector pair(s)` : "",
+    test.link.splices === undefined ? `${counts.splices} splice(s)` : "",
+  ].filter(Boolean);
+  if (fromEvents.length > 0) {
     addReason(ctx, {
       code: "budget.counts-from-events",
       severity: "info",
       rule: "link.connectorPairs, link.splices",
       source: "Glassgrade engine",
-      message: `Component counts not declared; taken from the event list: ${counts.connectorPairs} connector pair(s), ${counts.splices} splice(s).`,
+      message: `Not declared, so counted from the ${test.events?.length ? "event list" : "(empty) event list"}: ${fromEvents.join(", ")}.`,
     });
   }
   if (counts.undeclaredSplitterSites > 0) {
