@@ -1,5 +1,6 @@
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
+import { signInLimiter } from "./attempts";
 import { findUserByEmail, resolveMember } from "./memberships";
 import { verifyPassword } from "./password";
 import { signInSchema } from "./sign-in-schema";
@@ -19,9 +20,15 @@ export const authOptions: NextAuthOptions = {
       async authorize(raw) {
         const parsed = signInSchema.safeParse(raw);
         if (!parsed.success) return null;
+        const key = parsed.data.email.trim().toLowerCase();
+        if (signInLimiter.isBlocked(key)) return null;
         const user = await findUserByEmail(parsed.data.email);
         const ok = await verifyPassword(parsed.data.password, user?.passwordHash);
-        if (!user || !ok) return null;
+        if (!user || !ok) {
+          signInLimiter.fail(key);
+          return null;
+        }
+        signInLimiter.succeed(key);
         const member = await resolveMember(user.id);
         if (!member) return null; // a user without any organisation has nothing to see
         return {

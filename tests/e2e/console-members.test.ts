@@ -63,6 +63,7 @@ describe("members and invitations in Chromium", () => {
     // The admin changes the new member's role; the server has it afterwards.
     await admin.goto(`${APP_URL}/console/members`);
     await admin.getByLabel("Role of Maren Holt").selectOption("auditor");
+    await admin.getByRole("button", { name: "Save role of Maren Holt" }).click();
     await expect
       .poll(() => admin.evaluate(async (mail) => {
         const body = await (await fetch("/api/console/members")).json();

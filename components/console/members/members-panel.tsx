@@ -14,10 +14,10 @@ import type { InviteInput } from "@/lib/members/schemas";
 import { useMembers } from "@/lib/swr/hooks";
 import { formatDate } from "../format";
 import { InviteForm } from "./invite-form";
+import { RoleCell } from "./role-cell";
 
 const mcol = createColumnHelper<MemberRow>();
 const icol = createColumnHelper<PendingInvitation>();
-const ROLES: Role[] = ["admin", "engineer", "auditor", "developer"];
 
 export function MembersPanel({ initial, selfId, mailboxEnabled }: { initial: { members: MemberRow[]; invitations: PendingInvitation[] }; selfId: string; mailboxEnabled: boolean }) {
   const { data = initial, error, mutate } = useMembers(initial);
@@ -64,16 +64,8 @@ export function MembersPanel({ initial, selfId, mailboxEnabled }: { initial: { m
       mcol.accessor("email", { header: "E-mail" }),
       mcol.accessor("role", {
         header: "Role",
-        cell: (c) => (
-          <select
-            aria-label={`Role of ${c.row.original.name}`}
-            value={c.getValue()}
-            onChange={(e) => changeRole(c.row.original.userId, e.target.value as Role)}
-            className="rounded border border-ink-200 bg-white px-1.5 py-0.5 text-sm capitalize"
-          >
-            {ROLES.map((r) => <option key={r} value={r}>{r}</option>)}
-          </select>
-        ),
+        // Keyed by the stored role, so the staged choice resets once a change is saved.
+        cell: (c) => <RoleCell key={c.getValue()} name={c.row.original.name} role={c.getValue()} onSave={(r) => changeRole(c.row.original.userId, r)} />,
       }),
       mcol.accessor("joinedAt", { header: "Joined", cell: (c) => formatDate(c.getValue()) }),
       mcol.display({
