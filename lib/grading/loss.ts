@@ -135,7 +135,7 @@ export function gradeLoss(
       headroomDb: h,
       verdict: outcome,
       limitBasis: basis,
-      lossBudgetDb: budget?.totalDb ?? limitDb,
+      lossBudgetDb: budget?.totalDb ?? null,
       method,
       guardBandDb: guard,
       budget: {

@@ -335,7 +335,10 @@ export const WavelengthResultSchema = z.object({
   headroomDb: z.number().describe("budgetDb - measuredDb; negative when over budget"),
   verdict: VerdictSchema,
   limitBasis: z.enum(["loss-budget", "application", "pon-class"]),
-  lossBudgetDb: z.number().describe("The loss budget computed from the link's components"),
+  lossBudgetDb: z
+    .number()
+    .nullable()
+    .describe("The loss budget computed from the link's components; null when the profile has no attenuation limit for this fibre and wavelength"),
   direction: DirectionSchema.optional(),
   method: TestMethodSchema,
   guardBandDb: z.number(),
