@@ -1,5 +1,5 @@
-import type { Database } from "@/db";
-import { auditEvents } from "@/db/schema";
+import type { Database } from "../index";
+import { auditEvents } from "../schema";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 

@@ -4,7 +4,7 @@ import { apiKeys, users } from "@/db/schema";
 import { assertCan, type ActorContext, type Member } from "@/lib/auth/context";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/errors";
 import { can } from "@/lib/auth/roles";
-import { recordAudit } from "@/lib/members/audit";
+import { recordAudit } from "@/db/queries/audit-events";
 import { generateApiKey } from "./api-key";
 import { createKeySchema, revokeKeySchema } from "./manage-schemas";
 

@@ -8,7 +8,7 @@ import { hashToken, newToken } from "@/lib/auth/tokens";
 import { appBaseUrl } from "@/lib/mail/config";
 import { sendMail } from "@/lib/mail/send";
 import { invitationMail } from "@/lib/mail/templates";
-import { recordAudit } from "./audit";
+import { recordAudit } from "@/db/queries/audit-events";
 import { acceptInvitationSchema, inviteSchema, joinWithAccountSchema, revokeInvitationSchema } from "./schemas";
 
 export const INVITATION_DAYS = 7;

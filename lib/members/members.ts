@@ -3,7 +3,7 @@ import { getDb } from "@/db";
 import { invitations, memberships, users, type Role } from "@/db/schema";
 import { assertCan, type ActorContext } from "@/lib/auth/context";
 import { InputError, NotFoundError } from "@/lib/auth/errors";
-import { recordAudit } from "./audit";
+import { recordAudit } from "@/db/queries/audit-events";
 import { changeRoleSchema, removeMemberSchema } from "./schemas";
 
 export interface MemberRow {
