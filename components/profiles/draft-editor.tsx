@@ -126,7 +126,7 @@ function PonClassesTable() {
         </div>
       ))}
       <Button variant="secondary" size="sm" onClick={() => append({ ponClass: "", family: "", minLossDb: limit(13), maxLossDb: limit(28), receiverWindows: [] })}>Add PON class</Button>
-      <TextField name="defaultPonClass" label="Default PON class (when a test names none; leave empty for none)" />
+      <TextField name="defaultPonClass" label="Default PON class (when a test names none; leave empty for none)" optional />
     </Section>
   );
 }

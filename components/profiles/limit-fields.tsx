@@ -47,7 +47,7 @@ export function NumberField({ name, label, unit, step = "any", hideLabel }: { na
   );
 }
 
-export function TextField({ name, label, hideLabel, placeholder, list }: { name: string; label: string; hideLabel?: boolean; placeholder?: string; list?: boolean }) {
+export function TextField({ name, label, hideLabel, placeholder, list, optional }: { name: string; label: string; hideLabel?: boolean; placeholder?: string; list?: boolean; optional?: boolean }) {
   const { register, formState } = useFormContext();
   const id = useId();
   const error = errorAt(formState.errors, name);
@@ -60,7 +60,10 @@ export function TextField({ name, label, hideLabel, placeholder, list }: { name:
         aria-invalid={!!error || undefined}
         aria-describedby={error ? `${id}-error` : undefined}
         className={cn(CONTROL, error ? "border-verdict-fail" : "border-ink-200")}
-        {...register(name, list ? { setValueAs: (v: unknown) => (typeof v === "string" ? v.split(/[\s,]+/).filter(Boolean) : v) } : {})}
+        {...register(name, {
+          setValueAs: (v: unknown) =>
+            list && typeof v === "string" ? v.split(/[\s,]+/).filter(Boolean) : optional && (v === "" || v === null) ? undefined : v,
+        })}
       />
     </Control>
   );
