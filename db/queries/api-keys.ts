@@ -1,5 +1,5 @@
 // API-key reads and bookkeeping for request authentication (creation and revocation live in lib/keys/manage).
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import type { Database } from "@/db";
 import { apiKeys, organisations } from "@/db/schema";
 
@@ -15,9 +15,10 @@ export interface KeyRecord {
   defaultProfile: string;
 }
 
-/** One indexed lookup (unique index on hash) that also brings the organisation's default profile. */
-export async function findKeyByHash(db: Database, hash: string): Promise<KeyRecord | null> {
-  const [row] = await db
+// Prepared once per connection pool (named statements are kept per connection by PostgreSQL), so the
+// hot path skips parsing and planning.
+function buildFindKey(db: Database) {
+  return db
     .select({
       id: apiKeys.id,
       organisationId: apiKeys.organisationId,
@@ -31,8 +32,17 @@ export async function findKeyByHash(db: Database, hash: string): Promise<KeyReco
     })
     .from(apiKeys)
     .innerJoin(organisations, eq(organisations.id, apiKeys.organisationId))
-    .where(eq(apiKeys.hash, hash))
-    .limit(1);
+    .where(eq(apiKeys.hash, sql.placeholder("hash")))
+    .limit(1)
+    .prepare("gg_find_key_by_hash");
+}
+const findKeyStatements = new WeakMap<Database, ReturnType<typeof buildFindKey>>();
+
+/** One indexed lookup (unique index on hash) that also brings the organisation's default profile. */
+export async function findKeyByHash(db: Database, hash: string): Promise<KeyRecord | null> {
+  let stmt = findKeyStatements.get(db);
+  if (!stmt) findKeyStatements.set(db, (stmt = buildFindKey(db)));
+  const [row] = await stmt.execute({ hash });
   return row ?? null;
 }
 

@@ -84,14 +84,15 @@ export async function appendToChain(
       created_at: i.createdAt.toISOString(),
     })),
   );
-  const res = await pool.query<{ id: string; seq: string; prev_digest: string | null }>(APPEND_SQL, [
+  // Named, so each connection parses and plans this statement once.
+  const res = await pool.query<{ id: string; seq: string; prev_digest: string | null }>({ name: "gg_append_chain", text: APPEND_SQL, values: [
     organisationId,
     items.length,
     items[items.length - 1].digest,
     payload,
     by.apiKeyId,
     by.userId,
-  ]);
+  ] });
   return new Map(res.rows.map((r) => [r.id, { seq: Number(r.seq), prevDigest: r.prev_digest }]));
 }
 

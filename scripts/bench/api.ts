@@ -1,8 +1,8 @@
 // Benchmark of the grading API against `next start` and the real database.
 //   npm run bench:api            (env: BENCH_PORT=3121 BENCH_DB=glassgrade_bench_api BENCH_REQUESTS=3000
-//                                 BENCH_CONNECTIONS=10 BENCH_BATCH_CALLS=10 BENCH_BATCH_CONNECTIONS=2
+//                                 BENCH_ROUNDS=6 BENCH_CONNECTIONS=10 BENCH_BATCH_CALLS=10 BENCH_BATCH_CONNECTIONS=2
 //                                 NEXT_DIST_DIR=.next-bench)
-// 1. GET /api/v1/health and POST /api/v1/gradings, one after the other at the same concurrency: req/s,
+// 1. GET /api/v1/health and POST /api/v1/gradings in interleaved rounds at the same concurrency: req/s,
 //    p50 and p99 of each, and grading throughput as a ratio of health's (goal >= 0.60).
 // 2. Row accounting: new verdicts == 2xx gradings, new call-log rows == all responses (goal: no loss).
 // 3. POST /api/v1/gradings/batch with 1,000 tests per call: graded-and-stored tests/s and its ratio to
@@ -59,6 +59,28 @@ async function waitForHealth(timeoutMs: number) {
     await new Promise((r) => setTimeout(r, 250));
   }
   throw new Error(`next start did not answer on ${URL_BASE} within ${timeoutMs} ms`);
+}
+
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 6);
+
+/** Rounds summed: req/s over the total time; p50 and p99 are the medians of the rounds' values. */
+function combine(rounds: Result[]): Result {
+  const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+  const sum = (f: (r: Result) => number) => rounds.reduce((a, r) => a + f(r), 0);
+  const seconds = sum((r) => r.duration);
+  const responses = sum((r) => r["2xx"] + r.non2xx);
+  return {
+    ...rounds[0],
+    requests: { ...rounds[0].requests, average: responses / seconds },
+    latency: { ...rounds[0].latency, p50: median(rounds.map((r) => r.latency.p50)), p99: median(rounds.map((r) => r.latency.p99)) },
+    duration: seconds,
+    errors: sum((r) => r.errors),
+    timeouts: sum((r) => r.timeouts),
+    non2xx: sum((r) => r.non2xx),
+    "2xx": sum((r) => r["2xx"]),
+    "4xx": sum((r) => r["4xx"]),
+    "5xx": sum((r) => r["5xx"]),
+  };
 }
 
 function line(name: string, r: Result) {
@@ -128,14 +150,22 @@ async function main() {
 
     const logBefore = await callLogRows();
     const verdictsBefore = await verdictRows();
-    const health = await autocannon({ url: `${URL_BASE}/api/v1/health`, connections: CONNECTIONS, amount: REQUESTS });
-    const grading = await autocannon({ url: URL_BASE, connections: CONNECTIONS, amount: REQUESTS, requests: [gradingRequest] });
+    // Interleaved rounds, so both routes see the same background load on a shared machine.
+    const healthRounds: Result[] = [];
+    const gradingRounds: Result[] = [];
+    const perRound = Math.ceil(REQUESTS / ROUNDS);
+    for (let r = 0; r < ROUNDS; r++) {
+      healthRounds.push(await autocannon({ url: `${URL_BASE}/api/v1/health`, connections: CONNECTIONS, amount: perRound }));
+      gradingRounds.push(await autocannon({ url: URL_BASE, connections: CONNECTIONS, amount: perRound, requests: [gradingRequest] }));
+    }
+    const health = combine(healthRounds);
+    const grading = combine(gradingRounds);
     const logAfter = await callLogRows();
     const verdictsAfter = await verdictRows();
 
     const totalResponses = health["2xx"] + health.non2xx + grading["2xx"] + grading.non2xx;
     const ratio = grading.requests.average / health.requests.average;
-    console.log(`\nGlassgrade API benchmark: ${CONNECTIONS} connections, ${REQUESTS} requests per route, node ${process.version}, ${DIST}`);
+    console.log(`\nGlassgrade API benchmark: ${CONNECTIONS} connections, ${REQUESTS} requests per route in ${ROUNDS} interleaved rounds, node ${process.version}, ${DIST}`);
     // Other work on the machine slows both routes; the ratios are what carry over between machines.
     console.log(`machine: ${os.cpus().length} cores, load average ${os.loadavg().map((l) => l.toFixed(1)).join(" / ")}`);
     console.log(line("GET  /api/v1/health", health));
