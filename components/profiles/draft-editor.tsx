@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/states";
 import { DraftLimitsSchema, type DraftLimits } from "@/lib/profiles/limits-schema";
 import { saveDraftAction } from "@/app/(console)/console/profiles/actions";
-import { errorAt, LimitField, NumberField, OptionalGroup, Section, TextField } from "./limit-fields";
+import { errorAt, FoldedSection, LimitField, NumberField, OptionalGroup, Section, TextField } from "./limit-fields";
 import { ImpactPreview } from "./impact-preview";
 
 const SOURCE_TBD = "common practice";
@@ -55,7 +55,7 @@ function ApplicationsTable() {
   const { control } = useFormContext<DraftLimits>();
   const { fields, append, remove } = useFieldArray({ control, name: "applications" });
   return (
-    <Section title="Applications" description="Channel insertion loss and reach per application and wavelength (e.g. IEEE 802.3 tables). The budget used is the tighter of this and the component loss budget.">
+    <FoldedSection path="applications" count={fields.length} title="Applications" description="Channel insertion loss and reach per application and wavelength (e.g. IEEE 802.3 tables). The budget used is the tighter of this and the component loss budget.">
       {fields.length === 0 && <p className="text-sm text-ink-600">No application limits in this profile.</p>}
       <div className="space-y-3">
         {fields.map((f, i) => (
@@ -77,7 +77,7 @@ function ApplicationsTable() {
         ))}
       </div>
       <Button variant="secondary" size="sm" onClick={() => append({ application: "", fibreTypes: ["OM4"], wavelengthNm: 850, maxChannelLossDb: limit(2.9), maxReachM: limit(400) })}>Add application</Button>
-    </Section>
+    </FoldedSection>
   );
 }
 
@@ -109,7 +109,7 @@ function PonClassesTable() {
   const { control } = useFormContext<DraftLimits>();
   const { fields, append, remove } = useFieldArray({ control, name: "ponClasses" });
   return (
-    <Section title="PON classes" description="Optical distribution network classes: minimum and maximum path loss and the receivers' power windows.">
+    <FoldedSection path="ponClasses" count={fields.length} title="PON classes" description="Optical distribution network classes: minimum and maximum path loss and the receivers' power windows.">
       {fields.length === 0 && <p className="text-sm text-ink-600">No PON classes in this profile.</p>}
       {fields.map((f, i) => (
         <div key={f.id} className="space-y-2 rounded-md border border-ink-100 bg-white p-3">
@@ -127,7 +127,7 @@ function PonClassesTable() {
       ))}
       <Button variant="secondary" size="sm" onClick={() => append({ ponClass: "", family: "", minLossDb: limit(13), maxLossDb: limit(28), receiverWindows: [] })}>Add PON class</Button>
       <TextField name="defaultPonClass" label="Default PON class (when a test names none; leave empty for none)" optional />
-    </Section>
+    </FoldedSection>
   );
 }
 

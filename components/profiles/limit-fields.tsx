@@ -114,3 +114,32 @@ export function Section({ title, description, children }: { title: string; descr
     </section>
   );
 }
+
+/**
+ * A long table (applications, PON classes) folded away until needed. It opens by itself when a field
+ * inside it has an error, so a refused save never hides the message.
+ */
+export function FoldedSection({ title, description, path, count, children }: { title: string; description?: string; path: string; count: number; children: ReactNode }) {
+  const { formState } = useFormContext();
+  const hasError = errorTree(formState.errors, path);
+  return (
+    <details open={hasError || undefined} className="group rounded-lg border border-ink-100 bg-ink-50/60 p-4 [&[open]>summary>span.chev]:rotate-90">
+      <summary className="flex cursor-pointer list-none items-baseline gap-2">
+        <span aria-hidden className="chev inline-block text-ink-600 transition-transform">▸</span>
+        <h2 className="text-sm font-semibold text-ink-900">{title}</h2>
+        <span className="text-xs text-ink-600">{count} row{count === 1 ? "" : "s"}{hasError ? " · needs attention" : ""}</span>
+      </summary>
+      {description && <p className="mt-1 text-xs text-ink-600">{description}</p>}
+      <div className="mt-3 space-y-3">{children}</div>
+    </details>
+  );
+}
+
+function errorTree(errors: FieldErrors<FieldValues>, path: string): boolean {
+  let node: unknown = errors;
+  for (const part of path.split(".")) {
+    if (node === null || typeof node !== "object") return false;
+    node = (node as Record<string, unknown>)[part];
+  }
+  return node !== undefined && node !== null;
+}

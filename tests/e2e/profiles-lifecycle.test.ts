@@ -1,5 +1,6 @@
 // The engineer's and the auditor's work in Chromium: tighten a limit in a draft, preview its impact,
 // publish, grade through the API under the new version, see it on the verdict page; an auditor replays it.
+import path from "node:path";
 import { eq } from "drizzle-orm";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -67,7 +68,8 @@ describe("limit profile lifecycle and replay in the console", () => {
     // A tighter splice limit on links with lossy splices must move some of them.
     expect(changed).toBeGreaterThan(0);
     await expect(engineer.getByRole("table", { name: /Verdicts now/ }).count()).resolves.toBe(1);
-    await screenshot(engineer, "console-impact-preview");
+    await engineer.locator('section[aria-labelledby="preview-title"]').screenshot({ path: path.resolve(import.meta.dirname, "../../docs/screenshots/console-impact-preview.png") });
+    await screenshot(engineer, "console-profile-draft");
   });
 
   it("publishes version 1 with a change note", async () => {

@@ -27,7 +27,12 @@ export default async function DraftPage({ params }: { params: Promise<{ slug: st
       <PageHeader
         title={`${p.name}: draft of v${(latest ?? 0) + 1}`}
         description="Every limit with the source it comes from. Values are checked as you leave each field and again when you save."
-        actions={<Link href={`/console/profiles/${slug}`} className="text-sm text-lumen-700 underline-offset-2 hover:underline">Versions and compare</Link>}
+        actions={
+          <div className="flex items-center gap-4 text-sm">
+            {p.draft && canEdit && <a href="#preview-title" className="text-lumen-700 underline-offset-2 hover:underline">Impact preview and publish ↓</a>}
+            <Link href={`/console/profiles/${slug}`} className="text-lumen-700 underline-offset-2 hover:underline">Versions and compare</Link>
+          </div>
+        }
       />
       {p.draft ? (
         <>
