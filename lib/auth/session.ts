@@ -1,4 +1,5 @@
 import { getServerSession } from "next-auth";
+import { cache } from "react";
 import { cookies, headers } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { authOptions, SIGN_IN_PATH } from "./options";
@@ -11,13 +12,19 @@ import { can, type Permission } from "./roles";
 export const ORG_COOKIE = "gg_org";
 
 /** The signed-in member in their current organisation, or null when nobody (or an ex-member) is signed in. */
-export async function getMember(): Promise<Member | null> {
+export async function loadMember(): Promise<Member | null> {
   const session = await getServerSession(authOptions);
   const userId = session?.user?.id;
   if (!userId) return null;
   const preferred = (await cookies()).get(ORG_COOKIE)?.value ?? session.user?.organisationId;
   return resolveMember(userId, preferred);
 }
+
+/**
+ * loadMember, cached per request so the layout and the page share one session decode and one membership
+ * query. Code that changes the organisation cookie must use loadMember so it never sees a stale answer.
+ */
+export const getMember = cache(loadMember);
 
 /**
  * For server components and server actions: the member, or a redirect to sign-in when there is none,
