@@ -17,6 +17,12 @@ export async function readBodyText(req: Request, maxBytes: number): Promise<stri
     throw new ApiError("payload_too_large", `The body is ${declared} bytes; the limit for this route is ${maxBytes} bytes.`);
   }
   if (!req.body) return "";
+  // With a declared length, HTTP framing guarantees the body is exactly that long: read it in one go.
+  if (declared !== null && /^\d+$/.test(declared)) {
+    const bytes = new Uint8Array(await req.arrayBuffer());
+    if (bytes.byteLength > maxBytes) throw new ApiError("payload_too_large", `The body exceeds the limit of ${maxBytes} bytes for this route.`);
+    return decodeJson(bytes, req.headers.get("content-type"));
+  }
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;
@@ -30,11 +36,15 @@ export async function readBodyText(req: Request, maxBytes: number): Promise<stri
     }
     chunks.push(value);
   }
-  if (size === 0) return "";
-  if (!isJsonMediaType(req.headers.get("content-type"))) {
+  return decodeJson(Buffer.concat(chunks), req.headers.get("content-type"));
+}
+
+function decodeJson(bytes: Uint8Array, contentType: string | null): string {
+  if (bytes.byteLength === 0) return "";
+  if (!isJsonMediaType(contentType)) {
     throw new ApiError("unsupported_media_type", "Send the body as JSON with `Content-Type: application/json`.");
   }
-  return Buffer.concat(chunks).toString("utf8");
+  return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString("utf8");
 }
 
 export function parseJsonText(text: string): unknown {

@@ -124,6 +124,14 @@ describe("POST /api/v1/gradings: bad input", () => {
     expect(res.json.code).toBe("payload_too_large");
   });
 
+  it("reads a body with a declared Content-Length, and refuses a declared length over the cap before reading", async () => {
+    const body = JSON.stringify({ test: passingTest("T-CL") });
+    const ok = await call(POST, PATH, { key: key.secret, rawBody: body, headers: { "content-type": "application/json", "content-length": String(Buffer.byteLength(body)) } });
+    expect(ok.status).toBe(201);
+    const big = await call(POST, PATH, { key: key.secret, rawBody: body, headers: { "content-type": "application/json", "content-length": String(2 * 1024 * 1024) } });
+    expect(big.status).toBe(413);
+  });
+
   it("422 with a JSON pointer and message for every bad field, and stores nothing", async () => {
     const before = await countRows(verdicts, org.id);
     const t = passingTest() as any;
