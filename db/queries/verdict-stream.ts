@@ -53,19 +53,27 @@ export async function countVerdicts(db: Database, o: VerdictStreamOptions): Prom
   return o.limit === undefined ? n : Math.min(n, o.limit);
 }
 
+// The page of verdicts is cut first (an index range scan on (organisation_id, seq)) and only then joined
+// to tests: written as one join, PostgreSQL plans a parallel scan over the whole range for every batch,
+// which was several times slower on 200,000 stored tests.
 async function fetchBatch(db: Database, o: VerdictStreamOptions, after: number | null, size: number): Promise<StreamedVerdict[]> {
   const cursor = after === null ? sql`true` : o.order === "newest" ? sql`v.seq < ${after}` : sql`v.seq > ${after}`;
-  const order = o.order === "newest" ? sql`v.seq desc` : sql`v.seq asc`;
+  const order = o.order === "newest" ? sql`seq desc` : sql`seq asc`;
   const res = await db.execute(sql`
-    select v.id, v.seq, v.test_id as "testId", v.link_ref as "linkRef", v.verdict, v.headroom_db as "headroomDb",
-           v.profile_slug as "profileSlug", v.profile_version as "profileVersion", v.engine_version as "engineVersion",
-           v.digest, v.prev_digest as "prevDigest", v.created_at as "createdAt"
-           ${o.withResult ? sql`, v.result` : sql``}
+    with page as materialized (
+      select v.id, v.seq, v.test_id, v.link_ref, v.verdict, v.headroom_db, v.profile_slug, v.profile_version,
+             v.engine_version, v.digest, v.prev_digest, v.created_at ${o.withResult ? sql`, v.result` : sql``}
+      from verdicts v
+      where ${rangeFilter(o)} and ${cursor}
+      order by v.${order}
+      limit ${size})
+    select p.id, p.seq, p.test_id as "testId", p.link_ref as "linkRef", p.verdict, p.headroom_db as "headroomDb",
+           p.profile_slug as "profileSlug", p.profile_version as "profileVersion", p.engine_version as "engineVersion",
+           p.digest, p.prev_digest as "prevDigest", p.created_at as "createdAt"
+           ${o.withResult ? sql`, p.result` : sql``}
            ${o.withTest ? sql`, t.input, t.created_at as "testCreatedAt"` : sql``}
-    from verdicts v ${o.withTest ? sql`join tests t on t.id = v.test_id` : sql``}
-    where ${rangeFilter(o)} and ${cursor}
-    order by ${order}
-    limit ${size}`);
+    from page p ${o.withTest ? sql`join tests t on t.id = p.test_id` : sql``}
+    order by p.${order}`);
   return (res.rows as unknown as StreamedVerdict[]).map((r) => ({
     ...r,
     seq: Number(r.seq),
@@ -118,12 +126,16 @@ export function streamPreviewRows(db: Database, o: Omit<VerdictStreamOptions, "o
   const f = { ...o, order: "newest" as const };
   return keysetBatches(async (after, size) => {
     const res = await db.execute(sql`
-      select v.seq, v.id, v.link_ref as "linkRef", v.verdict, v.headroom_db as "headroomDb",
-             v.profile_slug as "profileSlug", v.profile_version as "profileVersion", t.input
-      from verdicts v join tests t on t.id = v.test_id
-      where ${rangeFilter(f)} and ${after === null ? sql`true` : sql`v.seq < ${after}`}
-      order by v.seq desc
-      limit ${size}`);
+      with page as materialized (
+        select v.seq, v.id, v.test_id, v.link_ref, v.verdict, v.headroom_db, v.profile_slug, v.profile_version
+        from verdicts v
+        where ${rangeFilter(f)} and ${after === null ? sql`true` : sql`v.seq < ${after}`}
+        order by v.seq desc
+        limit ${size})
+      select p.seq, p.id, p.link_ref as "linkRef", p.verdict, p.headroom_db as "headroomDb",
+             p.profile_slug as "profileSlug", p.profile_version as "profileVersion", t.input
+      from page p join tests t on t.id = p.test_id
+      order by p.seq desc`);
     const rows = res.rows as unknown as PreviewRow[];
     for (const r of rows) r.seq = Number(r.seq);
     return rows;
