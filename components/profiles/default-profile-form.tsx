@@ -22,7 +22,7 @@ export function DefaultProfileForm({ current, options, canEdit }: { current: str
         setMessage(r.ok ? { ok: true, text: `Default is now ${r.data.ref}.` } : { ok: false, text: r.issues[0]?.message ?? r.error });
       }}
     >
-      <div className="w-80">
+      <div className="w-full max-w-xl">
         <Select label="Default profile for API calls" value={value} onChange={(e) => setValue(e.target.value)} disabled={!canEdit || busy} error={message && !message.ok ? message.text : undefined}>
           {known.map((o) => <option key={o.ref} value={o.ref}>{o.label}</option>)}
         </Select>
