@@ -10,19 +10,10 @@ import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { DataTable } from "@/components/ui/data-table";
 import { EmptyState, ErrorState, Spinner } from "@/components/ui/states";
+import type { ExplorerRow } from "@/db/queries/verdict-explorer";
 
-interface Row {
-  id: string;
-  seq: number;
-  linkRef: string;
-  verdict: "pass" | "marginal" | "fail";
-  headroomDb: number | null;
-  profileSlug: string;
-  profileVersion: number;
-  engineVersion: string;
-  reasonCodes: string[];
-  createdAt: string;
-}
+// The route sends ExplorerRow with its time as an ISO string.
+type Row = Omit<ExplorerRow, "createdAt"> & { createdAt: string };
 interface Page {
   data: Row[];
   nextCursor: number | null;
