@@ -7,7 +7,7 @@ import { z } from "zod";
 import { GradingResultSchema, LinkTestSchema, ReasonSchema, WavelengthResultSchema, LimitsSchema } from "@/lib/grading/schema";
 import { ProblemSchema } from "@/lib/api/schemas/common";
 import { BatchRequestSchema, BatchResultSchema, GradingRequestSchema } from "@/lib/api/schemas/gradings";
-import { ReplayRequestSchema, ReplayResultSchema, VerdictListSchema, VerdictResourceSchema } from "@/lib/api/schemas/verdicts";
+import { ReplayRequestSchema, ReplayResultSchema, VerdictListSchema, VerdictResourceSchema, VerdictSummarySchema } from "@/lib/api/schemas/verdicts";
 import { ProfileDetailSchema, ProfileListSchema, ProfileVersionSchema } from "@/lib/api/schemas/profiles";
 
 function named(refId: string, schema: z.ZodType) {
@@ -33,6 +33,7 @@ export function createRegistry(): OpenAPIRegistry {
   named("BatchRequest", BatchRequestSchema);
   named("BatchResult", BatchResultSchema);
   named("Verdict", VerdictResourceSchema);
+  named("VerdictSummary", VerdictSummarySchema);
   named("VerdictList", VerdictListSchema);
   named("ReplayRequest", ReplayRequestSchema);
   named("ReplayResult", ReplayResultSchema);

@@ -1,7 +1,7 @@
 // A stored verdict row as the API shows it: no test id, key id or user id leaves the service.
 import type { StoredVerdict } from "@/db/schema";
 import type { GradingResult } from "@/lib/grading/schema";
-import type { VerdictResource } from "@/lib/api/schemas/verdicts";
+import type { VerdictResource, VerdictSummary } from "@/lib/api/schemas/verdicts";
 
 export function toVerdictResource(row: StoredVerdict): VerdictResource {
   const result = row.result as GradingResult;
@@ -17,6 +17,23 @@ export function toVerdictResource(row: StoredVerdict): VerdictResource {
     engineVersion: row.engineVersion,
     digest: row.digest,
     prevDigest: row.prevDigest,
+    createdAt: row.createdAt.toISOString(),
+  };
+}
+
+export function toVerdictSummary(row: StoredVerdict): VerdictSummary {
+  const result = row.result as GradingResult;
+  return {
+    id: row.id,
+    seq: row.seq,
+    linkRef: row.linkRef,
+    verdict: result.verdict,
+    headroomDb: result.headroomDb,
+    profile: { slug: row.profileSlug, version: row.profileVersion },
+    engineVersion: row.engineVersion,
+    digest: row.digest,
+    prevDigest: row.prevDigest,
+    reasonCodes: row.reasonCodes,
     createdAt: row.createdAt.toISOString(),
   };
 }

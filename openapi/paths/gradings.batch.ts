@@ -3,6 +3,11 @@ import { BatchRequestSchema, BatchResultSchema, MAX_BATCH_ITEMS } from "@/lib/ap
 import { exampleTest, exampleVerdict, EXAMPLE_PROFILE } from "../examples";
 import { AUTH_PROBLEMS, IDEMPOTENCY_PROBLEMS, POST_PROBLEMS, idempotencyKeyHeader, problems, rateLimitHeaders } from "../responses";
 
+function summary(v: NonNullable<ReturnType<typeof exampleVerdict>>) {
+  const { wavelengths: _w, reasons, ...rest } = v;
+  return { ...rest, reasonCodes: [...new Set(reasons.map((r) => r.code))] };
+}
+
 export const gradingsBatch = (): RouteConfig => {
   const v = exampleVerdict();
   return {
@@ -12,7 +17,7 @@ export const gradingsBatch = (): RouteConfig => {
     tags: ["Gradings"],
     summary: `Grade up to ${MAX_BATCH_ITEMS} link tests`,
     description:
-      "Each test is validated on its own: valid tests are graded and stored together in one transaction, invalid ones come back with their field errors and store nothing. The body may be up to 16 MiB. Needs the `grade` scope.",
+      "Each test is validated on its own: valid tests are graded and stored together in one statement, invalid ones come back with their field errors and store nothing. Graded items carry a verdict summary (reason codes, not texts); `GET /api/v1/verdicts/{id}` has the full verdict. The body may be up to 16 MiB. Needs the `grade` scope.",
     security: [{ apiKey: [] }],
     request: {
       headers: idempotencyKeyHeader,
@@ -48,7 +53,7 @@ export const gradingsBatch = (): RouteConfig => {
               invalid: 1,
               counts: { pass: v.verdict === "pass" ? 1 : 0, marginal: v.verdict === "marginal" ? 1 : 0, fail: v.verdict === "fail" ? 1 : 0 },
               items: [
-                { index: 0, status: "graded", verdict: v },
+                { index: 0, status: "graded", verdict: summary(v) },
                 { index: 1, status: "invalid", errors: [{ pointer: "/tests/1/link/fibreType", message: "Invalid option" }] },
               ],
             },

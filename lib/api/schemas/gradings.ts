@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { LinkTestSchema } from "@/lib/grading/schema";
 import { ProfileRefSchema } from "./common";
-import { VerdictResourceSchema } from "./verdicts";
+import { VerdictSummarySchema } from "./verdicts";
 
 export const MAX_BATCH_ITEMS = 1000;
 
@@ -35,7 +35,7 @@ export const BatchItemErrorSchema = z.object({
 });
 
 export const BatchItemSchema = z.discriminatedUnion("status", [
-  z.object({ index: z.number().int(), status: z.literal("graded"), verdict: VerdictResourceSchema }),
+  z.object({ index: z.number().int(), status: z.literal("graded"), verdict: VerdictSummarySchema }),
   z.object({ index: z.number().int(), status: z.literal("invalid"), errors: z.array(BatchItemErrorSchema) }),
 ]);
 

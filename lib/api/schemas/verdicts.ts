@@ -20,6 +20,22 @@ export const VerdictResourceSchema = z
   .meta({ description: "A stored, immutable verdict" });
 export type VerdictResource = z.infer<typeof VerdictResourceSchema>;
 
+export const VerdictSummarySchema = VerdictResourceSchema.pick({
+  id: true,
+  seq: true,
+  linkRef: true,
+  verdict: true,
+  headroomDb: true,
+  profile: true,
+  engineVersion: true,
+  digest: true,
+  prevDigest: true,
+  createdAt: true,
+})
+  .extend({ reasonCodes: z.array(z.string()).meta({ description: "Distinct reason codes; the full reasons are at GET /api/v1/verdicts/{id}" }) })
+  .meta({ description: "A stored verdict without its per-wavelength figures and reason texts (batch answers stay small)" });
+export type VerdictSummary = z.infer<typeof VerdictSummarySchema>;
+
 export const VerdictListQuerySchema = z
   .object({
     verdict: VerdictSchema.optional(),

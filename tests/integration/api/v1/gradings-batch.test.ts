@@ -46,6 +46,13 @@ describe("POST /api/v1/gradings/batch", () => {
     if (nonsense.status !== "invalid") throw new Error("expected invalid");
     expect(nonsense.errors.every((e) => e.pointer.startsWith("/tests/3/"))).toBe(true);
 
+    const failed = body.items[2];
+    if (failed.status !== "graded") throw new Error("expected graded");
+    expect(failed.verdict.verdict).toBe("fail");
+    expect(failed.verdict.reasonCodes).toContain("loss.over-budget");
+    // A summary: the full reasons are one GET away.
+    expect(res.json.items[2].verdict.reasons).toBeUndefined();
+
     const [n] = await getDb().select({ n: count() }).from(verdicts).where(eq(verdicts.organisationId, org.id));
     expect(n.n).toBe(2);
     const [t] = await getDb().select({ n: count() }).from(tests).where(eq(tests.organisationId, org.id));

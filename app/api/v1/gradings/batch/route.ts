@@ -1,5 +1,6 @@
 // POST /api/v1/gradings/batch: up to 1,000 tests; valid ones are graded and stored together, invalid ones
-// come back with their own field errors.
+// come back with their own field errors. Graded items carry a verdict summary (reason codes, not texts)
+// so a 1,000-item answer stays a few hundred kilobytes; GET /api/v1/verdicts/{id} has the full verdict.
 import { profileForRequest } from "@/lib/api/profile-for-request";
 import { fieldErrorsFromIssues } from "@/lib/api/problem";
 import { json } from "@/lib/api/respond";
@@ -7,7 +8,7 @@ import { BatchEnvelopeSchema, BatchResultSchema, type BatchResult } from "@/lib/
 import { withApiKey } from "@/lib/api/with-api-key";
 import { LinkTestSchema, type LinkTest } from "@/lib/grading/schema";
 import { gradeAndStore } from "@/lib/verdicts/grade";
-import { toVerdictResource } from "@/lib/verdicts/present";
+import { toVerdictSummary } from "@/lib/verdicts/present";
 
 export const dynamic = "force-dynamic";
 
@@ -26,7 +27,7 @@ export const POST = withApiKey(
     const counts = { pass: 0, marginal: 0, fail: 0 };
     rows.forEach((row, i) => {
       counts[row.verdict] += 1;
-      items[valid[i].index] = { index: valid[i].index, status: "graded", verdict: toVerdictResource(row) };
+      items[valid[i].index] = { index: valid[i].index, status: "graded", verdict: toVerdictSummary(row) };
     });
     // 201 when something was stored; 200 with every item invalid (nothing was created).
     return json(BatchResultSchema, { graded: rows.length, invalid: items.length - rows.length, counts, items }, { status: rows.length ? 201 : 200 });
