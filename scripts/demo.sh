@@ -15,6 +15,8 @@ export SMTP_PORT="${SMTP_PORT:-2525}"
 export EMAIL_SERVER="${EMAIL_SERVER:-smtp://127.0.0.1:$SMTP_PORT}"
 # The console's development mailbox page shows what the fake receiver caught.
 export DEV_MAILBOX="${DEV_MAILBOX:-1}"
+# The sign-in page lists the demo accounts.
+export GLASSGRADE_DEMO="${GLASSGRADE_DEMO:-1}"
 
 bash scripts/ensure-deps.sh
 bash scripts/pg.sh start
