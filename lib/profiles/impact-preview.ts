@@ -14,6 +14,7 @@ export type TransitionMatrix = Record<VerdictValue, Record<VerdictValue, number>
 
 export const DEFAULT_PREVIEW_LIMIT = 1000;
 export const CHANGED_LINKS_CAP = 500;
+const YIELD_EVERY = 100;
 
 export interface PreviewRequest {
   /** How many of the newest tests to re-grade: DEFAULT_PREVIEW_LIMIT when absent, or "all". */
@@ -91,7 +92,11 @@ export async function* previewImpact(
 
   for await (const batch of streamPreviewRows(ctx.db, opts)) {
     if (signal?.aborted) return;
-    for (const row of batch) {
+    for (let i = 0; i < batch.length; i++) {
+      // Let the event loop breathe now and then: the next batch is arriving on the socket meanwhile, and
+      // a loop that never yields would stall PostgreSQL once the socket buffer is full.
+      if (i % YIELD_EVERY === YIELD_EVERY - 1) await new Promise<void>((r) => setImmediate(r));
+      const row = batch[i];
       let result: ReturnType<typeof grade>;
       try {
         result = grade(row.input as Parameters<typeof grade>[0], profile);
