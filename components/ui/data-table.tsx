@@ -72,7 +72,7 @@ export function DataTable<T>({
               onClick={onRowClick ? () => onRowClick(row.original) : undefined}
               onKeyDown={onRowClick ? (e) => { if (e.key === "Enter" || e.key === " ") { e.preventDefault(); onRowClick(row.original); } } : undefined}
               tabIndex={onRowClick ? 0 : undefined}
-              aria-selected={onRowClick ? selectedRowId === row.id : undefined}
+              aria-current={onRowClick && selectedRowId === row.id ? "true" : undefined}
               className={cn(onRowClick && "cursor-pointer hover:bg-lumen-50 focus:bg-lumen-50", selectedRowId === row.id && "bg-lumen-50")}
             >
               {row.getVisibleCells().map((cell) => (

@@ -1,9 +1,10 @@
 "use client";
-import { useEffect, useRef, type ReactNode } from "react";
+import { useEffect, useId, useRef, type ReactNode } from "react";
 
 // The native <dialog> in modal mode traps focus, closes on Escape and restores focus to the opener.
 export function Dialog({ open, onClose, title, children, footer }: { open: boolean; onClose: () => void; title: string; children: ReactNode; footer?: ReactNode }) {
   const ref = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
   useEffect(() => {
     const d = ref.current;
     if (!d) return;
@@ -14,12 +15,12 @@ export function Dialog({ open, onClose, title, children, footer }: { open: boole
     <dialog
       ref={ref}
       onClose={onClose}
-      aria-labelledby="dialog-title"
+      aria-labelledby={titleId}
       className="w-full max-w-lg rounded-lg border border-ink-200 p-0 shadow-xl backdrop:bg-ink-900/40"
     >
       {open && (
         <div className="p-5">
-          <h2 id="dialog-title" className="text-base font-semibold text-ink-900">{title}</h2>
+          <h2 id={titleId} className="text-base font-semibold text-ink-900">{title}</h2>
           <div className="mt-3 text-sm text-ink-800">{children}</div>
           {footer && <div className="mt-5 flex justify-end gap-2">{footer}</div>}
         </div>
