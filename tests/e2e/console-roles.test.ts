@@ -73,6 +73,21 @@ describe("console roles in Chromium", () => {
     await page.close();
   });
 
+  it("console JSON routes answer 401 without a session and 422 for an invalid filter, as problem+json", async () => {
+    const anon = await fetch(`${APP_URL}/api/console/call-log`);
+    expect(anon.status).toBe(401);
+    expect(anon.headers.get("content-type")).toContain("application/problem+json");
+    const page = await signIn(browser, "auditor@northmere.example");
+    const bad = await page.evaluate(async () => {
+      const r = await fetch("/api/console/call-log?status=7xx&keyId=nope");
+      return { status: r.status, type: r.headers.get("content-type"), body: await r.json() };
+    });
+    expect(bad.status).toBe(422);
+    expect(bad.type).toContain("application/problem+json");
+    expect(bad.body.errors.map((e: { pointer: string }) => e.pointer).sort()).toEqual(["/keyId", "/status"]);
+    await page.close();
+  });
+
   it("signs out back to the sign-in page, after which /console needs a session again", async () => {
     const page = await signIn(browser, "engineer@northmere.example");
     await page.getByRole("button", { name: "Sign out" }).click();
