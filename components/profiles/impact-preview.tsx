@@ -48,11 +48,12 @@ export function TransitionMatrix({ summary }: { summary: PreviewSummary }) {
 export function ImpactPreview({ slug, currentLimits, dirty }: { slug: string; currentLimits: () => unknown; dirty: boolean }) {
   const { state, start, cancel } = useNdjsonJob<PreviewSummary>("/api/console/profiles/preview", pickSummary);
   const [limit, setLimit] = useState("1000");
+  const [scope, setScope] = useState<"related" | "all">("related");
   const [from, setFrom] = useState("");
   const [to, setTo] = useState("");
-  const ids = { limit: useId(), from: useId(), to: useId() };
+  const ids = { limit: useId(), from: useId(), to: useId(), scope: useId() };
 
-  const run = () => start({ slug, limits: currentLimits(), limit: limit === "all" ? "all" : Number(limit), from: localToIso(from), to: localToIso(to) });
+  const run = () => start({ slug, limits: currentLimits(), scope, limit: limit === "all" ? "all" : Number(limit), from: localToIso(from), to: localToIso(to) });
 
   return (
     <section aria-labelledby="preview-title" className="mt-6 space-y-4 rounded-lg border border-ink-100 bg-white p-4">
@@ -63,6 +64,13 @@ export function ImpactPreview({ slug, currentLimits, dirty }: { slug: string; cu
         </p>
       </div>
       <div className="flex flex-wrap items-end gap-3">
+        <div className="space-y-0.5">
+          <label htmlFor={ids.scope} className="block text-xs font-medium text-ink-800">Compare with</label>
+          <select id={ids.scope} value={scope} onChange={(e) => setScope(e.target.value as "related" | "all")} className="rounded-md border border-ink-200 bg-white px-2 py-1.5 text-sm">
+            <option value="related">Tests graded under this profile or its template</option>
+            <option value="all">Every stored test</option>
+          </select>
+        </div>
         <div className="space-y-0.5">
           <label htmlFor={ids.limit} className="block text-xs font-medium text-ink-800">Tests</label>
           <select id={ids.limit} value={limit} onChange={(e) => setLimit(e.target.value)} className="rounded-md border border-ink-200 bg-white px-2 py-1.5 text-sm">
@@ -102,7 +110,7 @@ export function ImpactPreview({ slug, currentLimits, dirty }: { slug: string; cu
 
 function PreviewResult({ summary }: { summary: PreviewSummary }) {
   if (summary.total === 0) {
-    return <EmptyState title="No stored tests in this range">Grade some tests through the API first, or widen the period.</EmptyState>;
+    return <EmptyState title="No stored tests to compare with">None in this period were graded under this profile or its template. Widen the period, or compare with every stored test.</EmptyState>;
   }
   return (
     <div className="space-y-4" data-testid="preview-result">

@@ -20,6 +20,8 @@ export interface VerdictStreamOptions {
   withResult?: boolean;
   /** Start after this seq (exclusive), in the walking direction. */
   afterSeq?: number;
+  /** Only verdicts graded under one of these profile slugs (any version). */
+  profileSlugs?: string[];
 }
 
 export interface StreamedVerdict {
@@ -44,6 +46,9 @@ function rangeFilter(o: VerdictStreamOptions): SQL {
   const parts: SQL[] = [sql`v.organisation_id = ${o.organisationId}`];
   if (o.from) parts.push(sql`v.created_at >= ${o.from.toISOString()}`);
   if (o.to) parts.push(sql`v.created_at < ${o.to.toISOString()}`);
+  if (o.profileSlugs) {
+    parts.push(o.profileSlugs.length ? sql`v.profile_slug in (${sql.join(o.profileSlugs.map((s) => sql`${s}`), sql`, `)})` : sql`false`);
+  }
   return sql.join(parts, sql` and `);
 }
 

@@ -19,6 +19,11 @@ const YIELD_EVERY = 100;
 export interface PreviewRequest {
   /** How many of the newest tests to re-grade: DEFAULT_PREVIEW_LIMIT when absent, or "all". */
   limit?: number | "all";
+  /**
+   * Which stored tests to compare: only those graded under these profile slugs (the profile and the
+   * template it came from, so like is compared with like), or every stored test when absent.
+   */
+  profileSlugs?: string[];
   from?: Date;
   to?: Date;
   batchSize?: number;
@@ -55,6 +60,14 @@ function emptyMatrix(): TransitionMatrix {
   return { pass: { pass: 0, marginal: 0, fail: 0 }, marginal: { pass: 0, marginal: 0, fail: 0 }, fail: { pass: 0, marginal: 0, fail: 0 } };
 }
 
+/** The slugs whose stored verdicts a preview of `slug` compares with by default: its own and its template's. */
+export async function relatedProfileSlugs(ctx: ProfileContext, slug: string): Promise<string[]> {
+  const profile = await findProfile(ctx.db, ctx.actor.organisationId, slug);
+  if (!profile) throw new NotFoundError(`Profile ${slug}`);
+  const base = profile.basedOn ? profile.basedOn.split("@")[0] : undefined;
+  return base && base !== slug ? [slug, base] : [slug];
+}
+
 /** Resolves what the preview grades under: the open draft, or given limits not yet saved. */
 export async function draftProfileFor(ctx: ProfileContext, slug: string, limits?: unknown): Promise<EngineProfile> {
   const profile = await findProfile(ctx.db, ctx.actor.organisationId, slug);
@@ -80,7 +93,7 @@ export async function* previewImpact(
 ): AsyncGenerator<PreviewEvent> {
   authorise(ctx.actor, "profiles:edit");
   checkPreviewRequest(req);
-  const opts = { organisationId: ctx.actor.organisationId, from: req.from, to: req.to, limit: req.limit === "all" ? undefined : (req.limit ?? DEFAULT_PREVIEW_LIMIT), order: "newest" as const, withTest: true, batchSize: req.batchSize ?? 2000 };
+  const opts = { organisationId: ctx.actor.organisationId, from: req.from, to: req.to, profileSlugs: req.profileSlugs, limit: req.limit === "all" ? undefined : (req.limit ?? DEFAULT_PREVIEW_LIMIT), order: "newest" as const, withTest: true, batchSize: req.batchSize ?? 2000 };
   const total = await countVerdicts(ctx.db, opts);
   const matrix = emptyMatrix();
   const changedLinks: ChangedLink[] = [];

@@ -14,6 +14,8 @@ export const PreviewRequestSchema = z.object({
   /** Limits from the editor that are not saved yet; the stored draft when absent. */
   limits: z.unknown().optional(),
   limit: z.union([z.literal("all"), z.coerce.number().int().min(1, "At least one test").max(10_000_000)]).default(1000),
+  /** "related": tests graded under this profile or its template; "all": every stored test. */
+  scope: z.enum(["related", "all"]).default("related"),
   from: instant.optional(),
   to: instant.optional(),
 });

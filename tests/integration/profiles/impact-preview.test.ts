@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb } from "@/db";
-import { grade } from "@/lib/grading";
+import { findTemplate, grade } from "@/lib/grading";
 import type { Profile } from "@/lib/grading/schema";
 import { ForbiddenError } from "@/lib/auth/errors";
 import { cloneTemplate, saveDraft } from "@/lib/profiles/drafts";
-import { draftProfileFor, previewImpact, type PreviewEvent, type PreviewRequest, type PreviewSummary } from "@/lib/profiles/impact-preview";
+import { draftProfileFor, previewImpact, relatedProfileSlugs, type PreviewEvent, type PreviewRequest, type PreviewSummary } from "@/lib/profiles/impact-preview";
 import type { LinkTest } from "@/lib/grading/schema";
 import { orgWithRoles, ospTemplate, storeHistory, type OrgWithRoles } from "../../helpers/profile-fixtures";
 
@@ -109,5 +109,14 @@ describe("impact preview", () => {
     expect(byDefault.summary.total).toBe(1000);
     const all = await run(o, draft, { limit: "all" });
     expect(all.summary.total).toBe(1100);
+  });
+
+  it("compares like with like by default: only tests graded under the profile or its template", async () => {
+    await storeHistory(o.org.id, 50, { seed: 13, profile: findTemplate("tia-568-3-d-singlemode-isp")!, end: new Date(end.getTime() + 2000 * 60_000) });
+    expect(await relatedProfileSlugs(o.ctx("engineer"), "tight-splices")).toEqual(["tight-splices", ospTemplate().slug]);
+    const related = await run(o, draft, { limit: "all", profileSlugs: await relatedProfileSlugs(o.ctx("engineer"), "tight-splices") });
+    expect(related.summary.total).toBe(1100);
+    const every = await run(o, draft, { limit: "all" });
+    expect(every.summary.total).toBe(1150);
   });
 });

@@ -1,7 +1,7 @@
 // POST /api/console/profiles/preview — impact preview of a draft, streamed as NDJSON progress + result.
 import { getDb } from "@/db";
 import { withConsoleSession } from "@/lib/auth/console-route";
-import { draftProfileFor, previewImpact } from "@/lib/profiles/impact-preview";
+import { draftProfileFor, previewImpact, relatedProfileSlugs } from "@/lib/profiles/impact-preview";
 import { ndjsonResponse } from "@/lib/profiles/ndjson";
 import { authorise } from "@/lib/profiles/access";
 import { PreviewRequestSchema, toDates } from "@/lib/profiles/requests";
@@ -12,5 +12,6 @@ export const POST = withConsoleSession(async ({ member, req }) => {
   const ctx = { db: getDb(), actor: member };
   authorise(member, "profiles:edit");
   const profile = await draftProfileFor(ctx, body.slug, body.limits);
-  return ndjsonResponse(previewImpact(ctx, profile, { limit: body.limit, ...toDates(body) }, req.signal), req.signal);
+  const profileSlugs = body.scope === "related" ? await relatedProfileSlugs(ctx, body.slug) : undefined;
+  return ndjsonResponse(previewImpact(ctx, profile, { limit: body.limit, profileSlugs, ...toDates(body) }, req.signal), req.signal);
 });
