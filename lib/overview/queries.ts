@@ -39,11 +39,15 @@ export async function getOverview({ actor }: ActorContext, opts: { days?: number
   const totals = { pass: 0, marginal: 0, fail: 0 };
   for (const d of verdictsPerDay) for (const k of VERDICT_KEYS) totals[k] += d[k];
 
-  // Reasons behind verdicts that were not a clean pass: what most often keeps links from acceptance.
+  // The findings that made links marginal or fail (informational reasons left out), counted once per
+  // verdict. Severity lives in the stored result, the engine's own output.
   const reasonRows = await db.execute<{ code: string; n: number }>(sql`
-    select code, count(*)::int as n
-    from ${verdicts}, unnest(${verdicts.reasonCodes}) as code
-    where ${verdicts.organisationId} = ${actor.organisationId} and ${verdicts.createdAt} >= ${since} and ${verdicts.verdict} <> 'pass'
+    select code, count(*)::int as n from (
+      select distinct ${verdicts.id} as id, r->>'code' as code
+      from ${verdicts}, jsonb_array_elements(coalesce(${verdicts.result}->'reasons', '[]'::jsonb)) as r
+      where ${verdicts.organisationId} = ${actor.organisationId} and ${verdicts.createdAt} >= ${since}
+        and r->>'severity' in ('marginal', 'fail')
+    ) findings
     group by code order by n desc, code asc limit 8`);
 
   const failures = await db

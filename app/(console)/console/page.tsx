@@ -58,7 +58,7 @@ export default async function OverviewPage() {
         <Card title="API calls per day" aside={o.callsOwnOnly ? "your keys only" : "whole organisation"}>
           {calls ? <StackedBars title="API calls per day" data={o.callsPerDay} series={CALL_SERIES} /> : <EmptyState title="No calls yet">Calls made with API keys are counted here.</EmptyState>}
         </Card>
-        <Card title="Top reason codes" aside="marginal and failed verdicts">
+        <Card title="Top reason codes" aside="findings that made links marginal or fail">
           {o.topReasons.length ? (
             <ol className="space-y-1.5">
               {o.topReasons.map((r) => (

@@ -11,20 +11,23 @@ describe("overview", () => {
   it("counts verdicts per day, ranks reason codes of non-passing links and lists recent failures", async () => {
     const { org, members } = await orgWithEveryRole();
     const other = await orgWithEveryRole();
+    // [link, verdict, reasons as code:severity, time]
     const spec: [string, "pass" | "marginal" | "fail", string[], string][] = [
-      ["L-1", "pass", [], "2026-11-30T09:00:00Z"],
-      ["L-2", "fail", ["loss.over-budget", "orl.below-minimum"], "2026-11-30T10:00:00Z"],
-      ["L-3", "marginal", ["loss.over-budget"], "2026-12-01T08:00:00Z"],
-      ["L-4", "pass", ["length.note"], "2026-12-01T09:00:00Z"],
-      ["L-5", "fail", ["event.break"], "2026-10-01T09:00:00Z"], // outside 30 days: not counted, still "recent"
+      ["L-1", "pass", ["loss.within-budget:info"], "2026-11-30T09:00:00Z"],
+      ["L-2", "fail", ["loss.over-budget:fail", "loss.over-budget:fail", "orl.below-minimum:fail", "loss.within-budget:info"], "2026-11-30T10:00:00Z"],
+      ["L-3", "marginal", ["loss.over-budget:marginal", "orl.inconsistent:info"], "2026-12-01T08:00:00Z"],
+      ["L-4", "pass", ["length.note:info"], "2026-12-01T09:00:00Z"],
+      ["L-5", "fail", ["event.break:fail"], "2026-10-01T09:00:00Z"], // outside 30 days: not counted, still "recent"
     ];
     let seq = 0;
-    for (const [ref, verdict, codes, at] of spec) {
+    for (const [ref, verdict, reasonSpecs, at] of spec) {
+      const reasons = reasonSpecs.map((x) => ({ code: x.split(":")[0], severity: x.split(":")[1] }));
+      const codes = [...new Set(reasons.map((r) => r.code))];
       for (const o of [org, other.org]) {
         const [t] = await getDb().insert(tests).values({ organisationId: o.id, linkRef: ref, input: {} }).returning();
         await getDb().insert(verdicts).values({
           organisationId: o.id, seq: ++seq, testId: t.id, linkRef: ref, verdict, profileSlug: "demo", profileVersion: 1,
-          engineVersion: "test", reasonCodes: codes, result: {}, digest: `d${seq}`, createdAt: new Date(at),
+          engineVersion: "test", reasonCodes: codes, result: { reasons }, digest: `d${seq}`, createdAt: new Date(at),
         });
       }
     }
@@ -39,7 +42,7 @@ describe("overview", () => {
     expect(o.verdictsPerDay.at(-1)).toEqual({ day: "2026-12-01", pass: 1, marginal: 1, fail: 0 });
     expect(o.verdictsPerDay.at(-2)).toEqual({ day: "2026-11-30", pass: 1, marginal: 0, fail: 1 });
     expect(o.totals).toEqual({ pass: 2, marginal: 1, fail: 1 });
-    // "length.note" belongs to a passing verdict and is left out.
+    // Informational reasons are left out, even on failed links; a code repeated in one verdict counts once.
     expect(o.topReasons).toEqual([
       { code: "loss.over-budget", n: 2 },
       { code: "orl.below-minimum", n: 1 },
