@@ -1,5 +1,5 @@
 import { ZodError } from "zod";
-import { problemResponse } from "@/lib/api/problem";
+import { fieldErrorsFromIssues, jsonPointer, problemResponse } from "@/lib/api/problem";
 import type { Member } from "./context";
 import { ForbiddenError, InputError, NotFoundError } from "./errors";
 import { getMember } from "./session";
@@ -20,12 +20,12 @@ export function withConsoleSession(handler: Handler) {
     } catch (err) {
       if (err instanceof ForbiddenError) return problemResponse("forbidden", err.message, { instance: url.pathname });
       if (err instanceof NotFoundError) return problemResponse("not_found", err.message, { instance: url.pathname });
-      if (err instanceof InputError) return problemResponse("validation_failed", err.message, { instance: url.pathname, errors: [{ pointer: err.field ? `/${err.field}` : "", message: err.message }] });
+      if (err instanceof InputError) {
+        const errors = err.issues.map((i) => ({ pointer: i.path ? jsonPointer(i.path.split(".")) : "", message: i.message }));
+        return problemResponse("validation_failed", err.message, { instance: url.pathname, errors });
+      }
       if (err instanceof ZodError) {
-        return problemResponse("validation_failed", "Some filters are not valid.", {
-          instance: url.pathname,
-          errors: err.issues.map((i) => ({ pointer: "/" + i.path.map(String).join("/"), message: i.message })),
-        });
+        return problemResponse("validation_failed", "Some filters are not valid.", { instance: url.pathname, errors: fieldErrorsFromIssues(err.issues) });
       }
       console.error("[console-route]", url.pathname, err);
       return problemResponse("internal_error", "Something went wrong on our side.", { instance: url.pathname });

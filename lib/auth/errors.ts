@@ -17,12 +17,20 @@ export class NotFoundError extends Error {
   }
 }
 
+/** One refused field: its dotted path inside the submitted object (react-hook-form's naming), "" for the whole. */
+export interface FieldIssue {
+  path: string;
+  message: string;
+}
+
 /** Input that passed the schema but breaks a rule that needs the database to check (e.g. a duplicate). */
 export class InputError extends Error {
   readonly kind = "input" as const;
-  constructor(message: string, readonly field?: string) {
+  readonly issues: FieldIssue[];
+  constructor(message: string, readonly field?: string, issues?: FieldIssue[]) {
     super(message);
     this.name = "InputError";
+    this.issues = issues ?? [{ path: field ?? "", message }];
   }
 }
 

@@ -1,7 +1,7 @@
 // Who is acting, and the typed refusals lib/profiles and lib/audit throw. The error classes are the
 // console's own (lib/auth/errors.ts), so server actions and console routes map them in one place.
 import type { Member } from "@/lib/auth/context";
-import { ForbiddenError, InputError, NotFoundError as AuthNotFoundError } from "@/lib/auth/errors";
+import { ForbiddenError, InputError, NotFoundError as AuthNotFoundError, type FieldIssue } from "@/lib/auth/errors";
 import { can, type Permission } from "@/lib/auth/roles";
 
 /** The part of a signed-in member these functions need; tests build it directly. */
@@ -24,16 +24,17 @@ export class ConflictError extends InputError {
   }
 }
 
-export interface FieldIssue {
-  /** Dotted path of the field inside the submitted object (react-hook-form's naming), "" for the whole object. */
-  path: string;
-  message: string;
-}
+export type { FieldIssue };
 
 export class InvalidInputError extends InputError {
-  constructor(readonly issues: FieldIssue[]) {
-    super(issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join("; "), issues[0]?.path || undefined);
+  constructor(issues: FieldIssue[]) {
+    super(issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join("; "), issues[0]?.path || undefined, issues);
     this.name = "InvalidInputError";
+  }
+
+  /** The same refusal with every path placed under `prefix`, for a route whose body nests the object. */
+  within(prefix: string): InvalidInputError {
+    return new InvalidInputError(this.issues.map((i) => ({ path: i.path ? `${prefix}.${i.path}` : prefix, message: i.message })));
   }
 }
 

@@ -69,7 +69,8 @@ describe("console routes for profiles, verdicts and audit", () => {
     const res = await previewRoute.POST(post("/api/console/profiles/preview", { slug: "route-osp", limits }));
     expect(res.status).toBe(422);
     const body = await res.json();
-    expect(body.errors[0].pointer).toBe("/spliceLossDb.value");
+    // RFC 6901 pointer into the request body.
+    expect(body.errors[0].pointer).toBe("/limits/spliceLossDb/value");
   });
 
   it("diffs two published versions", async () => {
