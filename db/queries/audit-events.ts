@@ -5,8 +5,17 @@ type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
 /** Records a console change inside the caller's transaction, so the change and its trail commit together. */
 export async function recordAudit(
-  tx: Tx,
-  e: { organisationId: string; actorUserId: string | null; action: string; entity: string; entityId: string; before?: unknown; after?: unknown },
+  tx: Database | Tx,
+  e: {
+    organisationId: string;
+    actorUserId: string | null;
+    action: string;
+    entity: string;
+    entityId: string;
+    before?: unknown;
+    after?: unknown;
+    requestId?: string | null;
+  },
 ) {
   await tx.insert(auditEvents).values({
     organisationId: e.organisationId,
@@ -16,5 +25,6 @@ export async function recordAudit(
     entityId: e.entityId,
     before: e.before ?? null,
     after: e.after ?? null,
+    requestId: e.requestId ?? null,
   });
 }

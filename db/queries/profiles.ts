@@ -2,7 +2,7 @@
 // organisation id; a profile of another organisation reads as absent.
 import { and, desc, eq, sql } from "drizzle-orm";
 import type { Database } from "../index";
-import { auditEvents, organisations, profiles, profileVersions, type Profile, type ProfileVersion } from "../schema";
+import { organisations, profiles, profileVersions, type Profile, type ProfileVersion } from "../schema";
 
 export type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 export type Queryable = Database | Tx;
@@ -108,6 +108,3 @@ export async function writeDefaultProfileRef(db: Queryable, organisationId: stri
   await db.update(organisations).set({ defaultProfile: ref }).where(eq(organisations.id, organisationId));
 }
 
-export async function recordAuditEvent(db: Queryable, values: typeof auditEvents.$inferInsert): Promise<void> {
-  await db.insert(auditEvents).values(values);
-}

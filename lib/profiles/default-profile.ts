@@ -1,5 +1,6 @@
 // The organisation's default profile is what the API grades under when a call names none.
-import { findProfile, findVersion, getDefaultProfileRef, latestVersion, recordAuditEvent, writeDefaultProfileRef } from "@/db/queries/profiles";
+import { recordAudit } from "@/db/queries/audit-events";
+import { findProfile, findVersion, getDefaultProfileRef, latestVersion, writeDefaultProfileRef } from "@/db/queries/profiles";
 import { authorise, InvalidInputError } from "./access";
 import type { ProfileContext } from "./context";
 import { templateBySlug } from "./limits";
@@ -25,7 +26,7 @@ export async function setDefaultProfile(ctx: ProfileContext, ref: string): Promi
     const normalised = version === undefined ? slug : `${slug}@${version}`;
     const before = await getDefaultProfileRef(tx, ctx.actor.organisationId);
     await writeDefaultProfileRef(tx, ctx.actor.organisationId, normalised);
-    await recordAuditEvent(tx, {
+    await recordAudit(tx, {
       organisationId: ctx.actor.organisationId,
       actorUserId: ctx.actor.userId,
       action: "organisation.default_profile_set",

@@ -1,10 +1,10 @@
 // Organisation profiles start as a draft cloned from a template; a draft is edited freely until it is
 // published (lib/profiles/publish.ts). Published versions are never edited: a new draft starts from one.
+import { recordAudit } from "@/db/queries/audit-events";
 import {
   findProfile,
   insertProfile,
   latestVersion,
-  recordAuditEvent,
   writeDraft,
 } from "@/db/queries/profiles";
 import { authorise, ConflictError, InvalidInputError, NotFoundError } from "./access";
@@ -42,7 +42,7 @@ export async function cloneTemplate(
       draft: structuredClone(template.limits) as object,
       draftUpdatedAt: new Date(),
     });
-    await recordAuditEvent(tx, {
+    await recordAudit(tx, {
       organisationId: ctx.actor.organisationId,
       actorUserId: ctx.actor.userId,
       action: "profile.cloned",
@@ -77,7 +77,7 @@ export async function saveDraft(ctx: ProfileContext, slug: string, limits: unkno
     const latest = await latestVersion(tx, profile.id);
     const valid = validateLimits({ slug, version: (latest?.version ?? 0) + 1, name: profile.name, limits });
     await writeDraft(tx, profile.id, valid.limits);
-    await recordAuditEvent(tx, {
+    await recordAudit(tx, {
       organisationId: ctx.actor.organisationId,
       actorUserId: ctx.actor.userId,
       action: "profile.draft_saved",
@@ -100,7 +100,7 @@ export async function discardDraft(ctx: ProfileContext, slug: string): Promise<v
       throw new ConflictError("A profile that was never published keeps its draft; there is nothing to go back to");
     }
     await writeDraft(tx, profile.id, null);
-    await recordAuditEvent(tx, {
+    await recordAudit(tx, {
       organisationId: ctx.actor.organisationId,
       actorUserId: ctx.actor.userId,
       action: "profile.draft_discarded",

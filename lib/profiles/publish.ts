@@ -1,6 +1,7 @@
 // Publishing freezes the draft as the next immutable version. The row lock on the profile serialises two
 // engineers publishing at once; the unique (profile, version) index is the last line of defence.
-import { findProfile, latestVersion, insertVersion, recordAuditEvent, writeDraft } from "@/db/queries/profiles";
+import { recordAudit } from "@/db/queries/audit-events";
+import { findProfile, latestVersion, insertVersion, writeDraft } from "@/db/queries/profiles";
 import { authorise, ConflictError, InvalidInputError, NotFoundError } from "./access";
 import type { ProfileContext } from "./context";
 import { diffJson } from "./diff";
@@ -30,7 +31,7 @@ export async function publishDraft(ctx: ProfileContext, slug: string, input: { n
       publishedByUserId: ctx.actor.userId,
     });
     await writeDraft(tx, profile.id, null);
-    await recordAuditEvent(tx, {
+    await recordAudit(tx, {
       organisationId: ctx.actor.organisationId,
       actorUserId: ctx.actor.userId,
       action: "profile.published",
