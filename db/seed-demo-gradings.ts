@@ -8,23 +8,13 @@ import { findTemplate, grade } from "@/lib/grading";
 import type { LinkTest, Profile } from "@/lib/grading/schema";
 import { displayStart, hashApiKey } from "@/lib/keys/api-key";
 import { storeGradings } from "@/lib/verdicts/store";
+import { seededRandom } from "@/lib/seeded-random";
 
 // DEMO ONLY: a publicly known sandbox key for the demo organisation. It is written by the seed of a local
 // demo database and nowhere else; never create it in a real installation.
 export const DEMO_SANDBOX_KEY = "gg_sbx_NorthmereDemoKey00000000000000000000000000";
 export const DEMO_DEFAULT_PROFILE = "tia-568-3-d-singlemode-osp";
 
-// Deterministic pseudo-random numbers (mulberry32) so every demo database looks the same.
-function rng(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const AREAS = ["BRACKENFOLD", "EASTMERE", "HAVERSTOKE", "TARNSIDE", "OWLCOTE", "SELDON-VALE"];
 const round = (x: number, d = 2) => Math.round(x * 10 ** d) / 10 ** d;
@@ -127,7 +117,7 @@ export async function seedDemoApi(db: Database, organisationId: string, now = ne
   };
   if (!profiles.osp || !profiles.pon || !profiles.campus) throw new Error("demo seed: a built-in template is missing");
 
-  const rand = rng(20261201);
+  const rand = seededRandom(20261201);
   const plan: { test: LinkTest; profile: Profile }[] = [];
   for (let i = 0; i < 52; i++) plan.push({ test: ospLink(i, rand), profile: profiles.osp });
   for (let i = 0; i < 18; i++) plan.push({ test: ponLink(i, rand), profile: profiles.pon });

@@ -1,18 +1,9 @@
 // Varied, plausible single-mode outside-plant link tests for previews, replays and benchmarks. An invented
 // scenario (Northmere's feeder routes), seeded so every run sees the same links.
 import type { LinkTest } from "@/lib/grading/schema";
+import { seededRandom } from "@/lib/seeded-random";
 
-export function seededRandom(seed: number): () => number {
-  // mulberry32: small, fast and good enough to spread test data.
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export { seededRandom };
 
 const round = (x: number, places = 2) => Math.round(x * 10 ** places) / 10 ** places;
 
