@@ -18,6 +18,12 @@ export DEV_MAILBOX="${DEV_MAILBOX:-1}"
 # The sign-in page lists the demo accounts.
 export GLASSGRADE_DEMO="${GLASSGRADE_DEMO:-1}"
 
+port_busy() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
+if port_busy "$PORT"; then
+  echo "[demo] port $PORT is already in use (another Glassgrade demo?). Stop it, or run: PORT=3001 npm run demo" >&2
+  exit 1
+fi
+
 bash scripts/ensure-deps.sh
 bash scripts/pg.sh start
 bash scripts/pg.sh createdb glassgrade
