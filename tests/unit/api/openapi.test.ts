@@ -47,6 +47,8 @@ describe("OpenAPI document", () => {
     expect(files.length).toBeGreaterThanOrEqual(9);
     const missing: string[] = [];
     for (const f of files) {
+      // The catch-all only answers 404 for paths that are not routes; it is not an operation to document.
+      if (f.includes("[...")) continue;
       const src = readFileSync(f, "utf8");
       for (const m of METHODS) {
         if (!new RegExp(`export (const|async function|function) ${m}\\b`).test(src)) continue;
