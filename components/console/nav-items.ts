@@ -18,6 +18,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/console/keys", label: "API keys", permission: "keys:manage-own" },
   { href: "/console/call-log", label: "Call log", permission: "calllog:read-own" },
   { href: "/console/members", label: "Members", permission: "members:manage" },
+  { href: "/console/retention", label: "Retention", permission: "retention:manage" },
   { href: "/console/mailbox", label: "Mailbox (dev)", permission: "mailbox:read", devOnly: true },
   { href: "/docs/api", label: "API reference", permission: "apidocs:read" },
 ];

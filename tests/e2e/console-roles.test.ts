@@ -6,7 +6,7 @@ import { screenshot, signIn } from "../helpers/console-browser";
 import { APP_URL } from "../helpers/test-env";
 
 // The console items this suite is about; other pages add their own links, checked by their own tests.
-const CONSOLE_ITEMS = ["Overview", "API keys", "Call log", "Members", "Mailbox (dev)", "API reference"];
+const CONSOLE_ITEMS = ["Overview", "API keys", "Call log", "Members", "Retention", "Mailbox (dev)", "API reference"];
 const NAV: Record<string, string[]> = {
   "engineer@northmere.example": ["Overview", "API keys", "Call log", "Mailbox (dev)", "API reference"],
   "auditor@northmere.example": ["Overview", "Call log", "Mailbox (dev)", "API reference"],
@@ -47,7 +47,7 @@ describe("console roles in Chromium", () => {
 
   it("an auditor is denied the keys and members pages with 403, and the console API refuses too", async () => {
     const page = await signIn(browser, "auditor@northmere.example");
-    for (const path of ["/console/keys", "/console/members"]) {
+    for (const path of ["/console/keys", "/console/members", "/console/retention"]) {
       const res = await page.goto(`${APP_URL}${path}`);
       expect(res?.status()).toBe(403);
       await expect(page.getByRole("heading", { name: "Not available for your role" }).count()).resolves.toBe(1);

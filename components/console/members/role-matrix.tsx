@@ -3,7 +3,7 @@ import { PERMISSIONS, ROLES, type Permission } from "@/lib/auth/roles";
 // Plain-language names for the permission table in lib/auth/roles.ts, which stays the single source.
 export const PERMISSION_LABELS: Record<Permission, string> = {
   "members:manage": "Invite and remove members, change roles",
-  "retention:manage": "Set data retention",
+  "retention:manage": "Set how long the call log is kept",
   "keys:manage-all": "Manage every API key of the organisation",
   "keys:manage-own": "Create and revoke their own API keys",
   "keys:create-live": "Create live keys (others: sandbox only)",

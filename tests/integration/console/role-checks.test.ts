@@ -10,6 +10,7 @@ import { createKey, listKeys, revokeKey } from "@/lib/keys/manage";
 import { changeMemberRole, listMembers, listPendingInvitations, removeMember } from "@/lib/members/members";
 import { inviteMember, revokeInvitation } from "@/lib/members/invitations";
 import { getOverview } from "@/lib/overview/queries";
+import { getRetention, setRetention } from "@/lib/retention/call-log";
 import { createUser } from "../../helpers/factories";
 import { ALL_ROLES, memberOf, orgWithEveryRole } from "./support";
 
@@ -33,6 +34,8 @@ const OPS: Record<string, { allowed: Role[]; run: Op }> = {
       return removeMember({ actor: m }, { userId: u.id });
     },
   },
+  "read retention": { allowed: ["admin"], run: (m) => getRetention({ actor: m }) },
+  "set retention": { allowed: ["admin"], run: (m) => setRetention({ actor: m }, { callLogDays: 400 }) },
   "list keys": { allowed: ["admin", "engineer", "developer"], run: (m) => listKeys({ actor: m }) },
   "create a sandbox key": { allowed: ["admin", "engineer", "developer"], run: (m) => createKey({ actor: m }, { name: "sbx", environment: "sandbox", scopes: ["grade"] }) },
   "create a live key": { allowed: ["admin", "engineer"], run: (m) => createKey({ actor: m }, { name: "live", environment: "live", scopes: ["grade"] }) },
