@@ -32,19 +32,23 @@ export interface InputProps extends InputHTMLAttributes<HTMLInputElement> {
   error?: string;
 }
 
-export const Input = forwardRef<HTMLInputElement, InputProps>(function Input({ label, hint, error, id, className, ...rest }, ref) {
+/** The id, ARIA wiring and border every labelled control shares. */
+function useControlProps({ id, hint, error, className }: { id?: string; hint?: ReactNode; error?: string; className?: string }) {
   const auto = useId();
   const fid = id ?? auto;
+  return {
+    id: fid,
+    "aria-invalid": !!error || undefined,
+    "aria-describedby": error ? `${fid}-error` : hint ? `${fid}-hint` : undefined,
+    className: cn(CONTROL, error ? "border-verdict-fail" : "border-ink-200", className),
+  };
+}
+
+export const Input = forwardRef<HTMLInputElement, InputProps>(function Input({ label, hint, error, id, className, ...rest }, ref) {
+  const control = useControlProps({ id, hint, error, className });
   return (
-    <FieldShell id={fid} label={label} hint={hint} error={error}>
-      <input
-        ref={ref}
-        id={fid}
-        aria-invalid={!!error || undefined}
-        aria-describedby={error ? `${fid}-error` : hint ? `${fid}-hint` : undefined}
-        className={cn(CONTROL, error ? "border-verdict-fail" : "border-ink-200", className)}
-        {...rest}
-      />
+    <FieldShell id={control.id} label={label} hint={hint} error={error}>
+      <input ref={ref} {...control} {...rest} />
     </FieldShell>
   );
 });
@@ -56,18 +60,10 @@ export interface SelectProps extends SelectHTMLAttributes<HTMLSelectElement> {
 }
 
 export const Select = forwardRef<HTMLSelectElement, SelectProps>(function Select({ label, hint, error, id, className, children, ...rest }, ref) {
-  const auto = useId();
-  const fid = id ?? auto;
+  const control = useControlProps({ id, hint, error, className });
   return (
-    <FieldShell id={fid} label={label} hint={hint} error={error}>
-      <select
-        ref={ref}
-        id={fid}
-        aria-invalid={!!error || undefined}
-        aria-describedby={error ? `${fid}-error` : hint ? `${fid}-hint` : undefined}
-        className={cn(CONTROL, error ? "border-verdict-fail" : "border-ink-200", className)}
-        {...rest}
-      >
+    <FieldShell id={control.id} label={label} hint={hint} error={error}>
+      <select ref={ref} {...control} {...rest}>
         {children}
       </select>
     </FieldShell>

@@ -3,16 +3,14 @@ import type { StoredVerdict } from "@/db/schema";
 import type { GradingResult } from "@/lib/grading/schema";
 import type { VerdictResource, VerdictSummary } from "@/lib/api/schemas/verdicts";
 
-export function toVerdictResource(row: StoredVerdict): VerdictResource {
-  const result = row.result as GradingResult;
+/** The fields a full verdict and a list entry share. */
+function common(row: StoredVerdict, result: GradingResult) {
   return {
     id: row.id,
     seq: row.seq,
     linkRef: row.linkRef,
     verdict: result.verdict,
     headroomDb: result.headroomDb,
-    wavelengths: result.wavelengths,
-    reasons: result.reasons,
     profile: { slug: row.profileSlug, version: row.profileVersion },
     engineVersion: row.engineVersion,
     digest: row.digest,
@@ -21,19 +19,11 @@ export function toVerdictResource(row: StoredVerdict): VerdictResource {
   };
 }
 
-export function toVerdictSummary(row: StoredVerdict): VerdictSummary {
+export function toVerdictResource(row: StoredVerdict): VerdictResource {
   const result = row.result as GradingResult;
-  return {
-    id: row.id,
-    seq: row.seq,
-    linkRef: row.linkRef,
-    verdict: result.verdict,
-    headroomDb: result.headroomDb,
-    profile: { slug: row.profileSlug, version: row.profileVersion },
-    engineVersion: row.engineVersion,
-    digest: row.digest,
-    prevDigest: row.prevDigest,
-    reasonCodes: row.reasonCodes,
-    createdAt: row.createdAt.toISOString(),
-  };
+  return { ...common(row, result), wavelengths: result.wavelengths, reasons: result.reasons };
+}
+
+export function toVerdictSummary(row: StoredVerdict): VerdictSummary {
+  return { ...common(row, row.result as GradingResult), reasonCodes: row.reasonCodes };
 }
