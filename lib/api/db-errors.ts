@@ -14,3 +14,19 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   }
   return false;
 }
+
+/**
+ * The driver's own words for a database failure (innermost cause: code and message), for the server log.
+ * Drizzle's wrapper message repeats the query and its parameters, which include key hashes; those stay out.
+ */
+export function describeDatabaseError(err: unknown): string {
+  let inner: unknown = err;
+  for (let depth = 0; depth < 6 && inner && typeof inner === "object" && (inner as { cause?: unknown }).cause; depth++) {
+    inner = (inner as { cause?: unknown }).cause;
+  }
+  if (inner && typeof inner === "object") {
+    const o = inner as { code?: unknown; message?: unknown };
+    return [typeof o.code === "string" ? o.code : "", typeof o.message === "string" ? o.message : ""].filter(Boolean).join(" ") || "unknown error";
+  }
+  return String(inner);
+}

@@ -5,7 +5,7 @@ import { insertCallLog } from "@/db/queries/call-log";
 import type { KeyRecord } from "@/db/queries/api-keys";
 import type { ApiScope } from "@/lib/keys/api-key";
 import { touchLastUsed, verifyApiKey } from "@/lib/keys/verify";
-import { isDatabaseUnavailable } from "./db-errors";
+import { describeDatabaseError, isDatabaseUnavailable } from "./db-errors";
 import { parseIdempotencyKey, reserve, settle } from "./idempotency";
 import { ApiError, problemResponse, type ProblemCode } from "./problem";
 import { TokenBucketLimiter, rateLimitHeaders } from "./rate-limit";
@@ -65,7 +65,7 @@ function errorResponse(err: unknown, requestId: string, instance: string): { res
     };
   }
   if (isDatabaseUnavailable(err)) {
-    console.error(`[api] ${requestId} database unavailable:`, err instanceof Error ? err.message : err);
+    console.error(`[api] ${requestId} database unavailable:`, describeDatabaseError(err));
     return {
       res: problemResponse("database_unavailable", "The database did not answer; nothing was stored. Retry later.", {
         instance,
@@ -113,7 +113,7 @@ async function writeCallLog(
     });
   } catch (err) {
     // The response still goes out (e.g. the 503 that explains the database is down).
-    console.error(`[api] ${requestId} call-log write failed:`, err instanceof Error ? err.message : err);
+    console.error(`[api] ${requestId} call-log write failed:`, describeDatabaseError(err));
   }
 }
 

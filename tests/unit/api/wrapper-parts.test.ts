@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { isDatabaseUnavailable } from "@/lib/api/db-errors";
+import { describeDatabaseError, isDatabaseUnavailable } from "@/lib/api/db-errors";
 import { parseIdempotencyKey, requestFingerprint } from "@/lib/api/idempotency";
 import { ApiError, fieldErrorsFromIssues, jsonPointer } from "@/lib/api/problem";
 import { TokenBucketLimiter, rateLimitHeaders } from "@/lib/api/rate-limit";
@@ -110,5 +110,13 @@ describe("small pieces", () => {
     expect(isDatabaseUnavailable(Object.assign(new Error("x"), { code: "57P01" }))).toBe(true);
     expect(isDatabaseUnavailable(Object.assign(new Error("duplicate key"), { code: "23505" }))).toBe(false);
     expect(isDatabaseUnavailable(new TypeError("undefined is not a function"))).toBe(false);
+  });
+
+  it("logs a database failure in the driver's words, without the query's parameters", () => {
+    const refused = Object.assign(new Error("connect ECONNREFUSED 127.0.0.1:9"), { code: "ECONNREFUSED" });
+    const wrapped = new Error('Failed query: select ... where "hash" = $1\nparams: 70bb2e5494', { cause: refused });
+    const line = describeDatabaseError(wrapped);
+    expect(line).toBe("ECONNREFUSED connect ECONNREFUSED 127.0.0.1:9");
+    expect(line).not.toContain("70bb2e5494");
   });
 });
