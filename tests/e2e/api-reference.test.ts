@@ -1,9 +1,8 @@
 // The API over real HTTP (supertest against `next start`) and the API reference page in Chromium.
-import type { Browser } from "playwright-core";
 import request from "supertest";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { DEMO_SANDBOX_KEY } from "@/db/seed-demo-gradings";
-import { launchBrowser } from "../helpers/browser";
+import { sharedBrowser } from "../helpers/browser";
 import { screenshot, signIn } from "../helpers/console-browser";
 import { APP_URL } from "../helpers/test-env";
 import { passingTest } from "../integration/api/v1/fixtures";
@@ -51,16 +50,10 @@ describe("API over HTTP", () => {
 });
 
 describe("API reference page in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser();
 
   it("shows the quickstart and the operations to a visitor, without try-it", async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    const page = await browser().newPage({ viewport: { width: 1280, height: 900 } });
     await page.goto(`${APP_URL}/docs/api`);
     await expect(page.locator("h1").innerText()).resolves.toBe("API reference");
     expect(await page.getByText("curl -sS").count()).toBeGreaterThan(0);
@@ -71,7 +64,7 @@ describe("API reference page in Chromium", () => {
   });
 
   it("lets a signed-in developer try a call with the sandbox key", async () => {
-    const page = await signIn(browser, "developer@northmere.example");
+    const page = await signIn(browser(), "developer@northmere.example");
     const errors: string[] = [];
     page.on("pageerror", (e) => errors.push(e.message));
     await page.goto(`${APP_URL}/docs/api`);

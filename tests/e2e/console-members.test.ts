@@ -1,23 +1,16 @@
 // Inviting a member end to end: the admin invites, the mail arrives at the fake SMTP server and shows in
 // the development mailbox, the link opens the accept page, and the new member signs in with their role.
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser } from "../helpers/browser";
+import { describe, expect, it } from "vitest";
+import { sharedBrowser } from "../helpers/browser";
 import { screenshot, signIn } from "../helpers/console-browser";
 import { APP_URL } from "../helpers/test-env";
 
 describe("members and invitations in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser();
 
   it("invites by e-mail, follows the mailed link, and the new member signs in", async () => {
     const email = `splicer-${Date.now()}@northmere.example`;
-    const admin = await signIn(browser, "admin@northmere.example");
+    const admin = await signIn(browser(), "admin@northmere.example");
     await admin.goto(`${APP_URL}/console/members`);
     const form = admin.getByRole("form", { name: "Invite a member" });
     await form.getByLabel("E-mail").fill(email);
@@ -38,7 +31,7 @@ describe("members and invitations in Chromium", () => {
     expect(href).toMatch(new RegExp(`^${APP_URL.replace(/[.]/g, "\\.")}/invite/[A-Za-z0-9_-]{43}$`));
     await screenshot(admin, "console-mailbox");
 
-    const guest = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+    const guest = await browser().newPage({ viewport: { width: 1280, height: 800 } });
     await guest.goto(href!);
     await guest.getByRole("heading", { name: "Join Northmere Fibre" }).waitFor();
     await guest.getByLabel("Your name").fill("Maren Holt");
@@ -50,12 +43,12 @@ describe("members and invitations in Chromium", () => {
     await guest.waitForURL(/\/sign-in\?joined=1/);
     await guest.close();
 
-    const joined = await signIn(browser, email, "spool of dark fibre");
+    const joined = await signIn(browser(), email, "spool of dark fibre");
     await expect(joined.getByTestId("role").textContent()).resolves.toBe("engineer");
     await joined.close();
 
     // The link works once.
-    const again = await browser.newPage();
+    const again = await browser().newPage();
     await again.goto(href!);
     await again.getByText("This invitation no longer works").waitFor();
     await again.close();

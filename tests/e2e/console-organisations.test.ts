@@ -1,26 +1,19 @@
 // A person who belongs to two organisations works in one at a time and switches in the top bar; what
 // they see (and their role) follows the organisation.
 import bcrypt from "bcryptjs";
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { desc, sql } from "drizzle-orm";
 import { devMailbox, memberships } from "@/db/schema";
 import { inviteMember } from "@/lib/members/invitations";
 import { firstLink } from "@/lib/mail/templates";
-import { launchBrowser } from "../helpers/browser";
+import { sharedBrowser } from "../helpers/browser";
 import { signIn } from "../helpers/console-browser";
 import { createOrganisation, createUser } from "../helpers/factories";
 import { APP_URL } from "../helpers/test-env";
 
 describe("members of several organisations", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser();
 
   it("switches organisation and role from the top bar", async () => {
     const first = await createOrganisation({ name: "Aldmoor Fibre Co-op" });
@@ -28,7 +21,7 @@ describe("members of several organisations", () => {
     const user = await createUser(first, "admin", { passwordHash: await bcrypt.hash("two hats long password", 4) });
     await getDb().insert(memberships).values({ organisationId: second.id, userId: user.id, role: "auditor" });
 
-    const page = await signIn(browser, user.email, "two hats long password");
+    const page = await signIn(browser(), user.email, "two hats long password");
     const picker = page.getByLabel("Organisation");
     await expect(picker.inputValue()).resolves.toBe(first.id);
     await expect(page.getByTestId("role").textContent()).resolves.toBe("admin");
@@ -60,7 +53,7 @@ describe("members of several organisations", () => {
     }
     expect(link).toMatch(/\/invite\//);
 
-    const guest = await browser.newPage();
+    const guest = await browser().newPage();
     await guest.goto(link!);
     await guest.getByText("You already have an account").waitFor();
     await expect(guest.getByLabel("Choose a password").count()).resolves.toBe(0);
@@ -68,7 +61,7 @@ describe("members of several organisations", () => {
     await guest.waitForURL(/\/sign-in\?joined=1/);
     await guest.close();
 
-    const page = await signIn(browser, person.email, "my only long password");
+    const page = await signIn(browser(), person.email, "my only long password");
     const options = await page.getByLabel("Organisation").locator("option").allTextContents();
     expect(options.sort()).toEqual(["Skerry Point Fibre", "Tarnbeck Telecom"]);
     await page.close();

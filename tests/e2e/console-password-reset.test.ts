@@ -2,12 +2,11 @@
 // sign in with it; the old password and the used link stop working.
 import bcrypt from "bcryptjs";
 import { desc, sql } from "drizzle-orm";
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { getDb } from "@/db";
 import { devMailbox } from "@/db/schema";
 import { firstLink } from "@/lib/mail/templates";
-import { launchBrowser } from "../helpers/browser";
+import { sharedBrowser } from "../helpers/browser";
 import { screenshot, signIn } from "../helpers/console-browser";
 import { createOrganisation, createUser } from "../helpers/factories";
 import { APP_URL } from "../helpers/test-env";
@@ -22,19 +21,13 @@ async function mailTo(email: string): Promise<string> {
 }
 
 describe("password reset in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser();
 
   it("resets the password through the mailed link", async () => {
     const org = await createOrganisation({ name: "Hollin Ridge Networks" });
     const user = await createUser(org, "developer", { passwordHash: await bcrypt.hash("original long password", 4) });
 
-    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+    const page = await browser().newPage({ viewport: { width: 1280, height: 800 } });
     await page.goto(`${APP_URL}/sign-in`);
     await page.getByRole("link", { name: "Forgot your password?" }).click();
     await page.waitForURL(`${APP_URL}/forgot-password`);
@@ -60,11 +53,11 @@ describe("password reset in Chromium", () => {
     await page.getByText("Sign-in failed").waitFor();
     await page.close();
 
-    const signedIn = await signIn(browser, user.email, "a brand new passphrase");
+    const signedIn = await signIn(browser(), user.email, "a brand new passphrase");
     await expect(signedIn.getByTestId("org-name").innerText()).resolves.toBe("Hollin Ridge Networks");
     await signedIn.close();
 
-    const again = await browser.newPage();
+    const again = await browser().newPage();
     await again.goto(link!);
     await again.getByText("This link no longer works").waitFor();
     await again.close();

@@ -1,20 +1,13 @@
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser } from "../helpers/browser";
+import { describe, expect, it } from "vitest";
+import { sharedBrowser } from "../helpers/browser";
 import { screenshot, signIn } from "../helpers/console-browser";
 import { APP_URL } from "../helpers/test-env";
 
 describe("retention page in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser();
 
   it("an admin refuses a too-short period on the field, then saves a valid one that stays after reload", async () => {
-    const page = await signIn(browser, "admin@calder.example");
+    const page = await signIn(browser(), "admin@calder.example");
     await page.goto(`${APP_URL}/console/retention`);
     const days = page.getByLabel("Keep API calls for (days)");
     await days.fill("7");

@@ -1,7 +1,6 @@
 // What each demo role sees, and that the server refuses what the sidebar hides.
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser } from "../helpers/browser";
+import { describe, expect, it } from "vitest";
+import { sharedBrowser } from "../helpers/browser";
 import { screenshot, signIn } from "../helpers/console-browser";
 import { APP_URL } from "../helpers/test-env";
 
@@ -14,16 +13,10 @@ const NAV: Record<string, string[]> = {
 };
 
 describe("console roles in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser();
 
   it("sends a visitor without a session to sign-in and rejects a wrong password", async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+    const page = await browser().newPage({ viewport: { width: 1280, height: 800 } });
     await page.goto(`${APP_URL}/console/keys`);
     await page.waitForURL(/\/sign-in\?callbackUrl=%2Fconsole%2Fkeys/);
     await page.getByLabel("E-mail").fill("admin@northmere.example");
@@ -37,7 +30,7 @@ describe("console roles in Chromium", () => {
 
   for (const [email, labels] of Object.entries(NAV)) {
     it(`${email.split("@")[0]} sees only their pages`, async () => {
-      const page = await signIn(browser, email);
+      const page = await signIn(browser(), email);
       const nav = page.getByRole("navigation", { name: "Console" });
       const shown = await nav.getByRole("link").allTextContents();
       expect(shown.filter((l) => CONSOLE_ITEMS.includes(l))).toEqual(labels);
@@ -46,7 +39,7 @@ describe("console roles in Chromium", () => {
   }
 
   it("an auditor is denied the keys and members pages with 403, and the console API refuses too", async () => {
-    const page = await signIn(browser, "auditor@northmere.example");
+    const page = await signIn(browser(), "auditor@northmere.example");
     for (const path of ["/console/keys", "/console/members", "/console/retention"]) {
       const res = await page.goto(`${APP_URL}${path}`);
       expect(res?.status()).toBe(403);
@@ -63,7 +56,7 @@ describe("console roles in Chromium", () => {
   });
 
   it("a developer may only create sandbox keys, and works at tablet width", async () => {
-    const page = await signIn(browser, "developer@northmere.example", undefined, { width: 820, height: 1100 });
+    const page = await signIn(browser(), "developer@northmere.example", undefined, { width: 820, height: 1100 });
     await page.goto(`${APP_URL}/console/keys`);
     await page.getByRole("button", { name: "Create key", exact: true }).first().click();
     const env = page.getByRole("dialog", { name: "Create an API key" }).getByLabel("Environment");
@@ -77,7 +70,7 @@ describe("console roles in Chromium", () => {
     const anon = await fetch(`${APP_URL}/api/console/call-log`);
     expect(anon.status).toBe(401);
     expect(anon.headers.get("content-type")).toContain("application/problem+json");
-    const page = await signIn(browser, "auditor@northmere.example");
+    const page = await signIn(browser(), "auditor@northmere.example");
     const bad = await page.evaluate(async () => {
       const r = await fetch("/api/console/call-log?status=7xx&keyId=nope");
       return { status: r.status, type: r.headers.get("content-type"), body: await r.json() };
@@ -89,7 +82,7 @@ describe("console roles in Chromium", () => {
   });
 
   it("signs out back to the sign-in page, after which /console needs a session again", async () => {
-    const page = await signIn(browser, "engineer@northmere.example");
+    const page = await signIn(browser(), "engineer@northmere.example");
     await page.getByRole("button", { name: "Sign out" }).click();
     await page.waitForURL(/\/sign-in\?signedOut=1/);
     await page.goto(`${APP_URL}/console`);

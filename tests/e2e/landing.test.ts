@@ -1,20 +1,13 @@
 import path from "node:path";
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser } from "../helpers/browser";
+import { describe, expect, it } from "vitest";
+import { sharedBrowser } from "../helpers/browser";
 import { APP_URL } from "../helpers/test-env";
 
 describe("landing page in Chromium", () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = sharedBrowser();
 
   it("tells a visitor what Glassgrade does, shows the laser-safety caution and links to sign-in", async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    const page = await browser().newPage({ viewport: { width: 1280, height: 900 } });
     const res = await page.goto(APP_URL + "/");
     expect(res?.status()).toBe(200);
     await expect(page.title()).resolves.toBe("Glassgrade");

@@ -1,4 +1,5 @@
 import { chromium, type Browser } from "playwright-core";
+import { afterAll, beforeAll } from "vitest";
 
 // Debian's Chromium, with the flags that keep it off the (closed) network.
 export function launchBrowser(): Promise<Browser> {
@@ -16,4 +17,22 @@ export function launchBrowser(): Promise<Browser> {
       "--disable-sync",
     ],
   });
+}
+
+/**
+ * One Chromium for the enclosing describe block: launched before its tests, closed after them. Call it at
+ * the top of the block and read the browser through the returned getter.
+ */
+export function sharedBrowser(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error("the browser is launched in beforeAll; use it inside a test");
+    return browser;
+  };
 }
