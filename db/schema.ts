@@ -123,6 +123,23 @@ export const verdicts = pgTable("verdicts", {
   index("verdicts_org_link_idx").on(t.organisationId, t.linkRef),
 ]);
 
+// A compact copy of each stored test's graded input beside its verdict, in chain order: impact previews
+// re-grade hundreds of thousands of tests and read only this narrow table instead of joining every
+// verdict to its jsonb test. Filled by a trigger on verdicts (migration 0005), so every write path keeps
+// it complete; the format is written by glassgrade_pack_test_input() and read by
+// lib/verdicts/packed-input.ts. The tests table stays the record; this is derived from it.
+export const previewInputs = pgTable("preview_inputs", {
+  organisationId: uuid("organisation_id").notNull().references(() => organisations.id, { onDelete: "cascade" }),
+  seq: bigint("seq", { mode: "number" }).notNull(),
+  verdictId: uuid("verdict_id").notNull().references(() => verdicts.id, { onDelete: "cascade" }),
+  verdict: verdictEnum("verdict").notNull(),
+  headroomDb: real("headroom_db"),
+  profileSlug: text("profile_slug").notNull(),
+  profileVersion: integer("profile_version").notNull(),
+  createdAt: timestamp("created_at", { withTimezone: true }).notNull(),
+  packed: text("packed").notNull(),
+}, (t) => [primaryKey({ columns: [t.organisationId, t.seq] })]);
+
 // Head of each organisation's verdict chain: appends update this one row (its row lock serialises them)
 // and insert their verdicts in the same statement, so storing a grading is a single round trip.
 export const verdictChainHeads = pgTable("verdict_chain_heads", {
