@@ -115,34 +115,67 @@ export function streamVerdicts(db: Database, o: VerdictStreamOptions): AsyncGene
   return keysetBatches((after, size) => fetchBatch(db, o, after, size), o);
 }
 
-/** Only what an impact preview reads: a lean row keeps the per-row decoding cost down. */
+/**
+ * Only what an impact preview reads, from preview_inputs: the verdict as stored and the compact copy of
+ * its test's input (decoded by lib/verdicts/packed-input.ts). No join to tests and no jsonb to convert,
+ * which made reading, not grading, most of a large preview's time.
+ */
 export interface PreviewRow {
-  id: string;
+  verdictId: string;
   seq: number;
-  linkRef: string;
   verdict: "pass" | "marginal" | "fail";
   headroomDb: number | null;
   profileSlug: string;
   profileVersion: number;
-  input: unknown;
+  packed: string;
 }
 
-export function streamPreviewRows(db: Database, o: Omit<VerdictStreamOptions, "order" | "withTest" | "withResult">): AsyncGenerator<PreviewRow[]> {
+export type PreviewStreamOptions = Omit<VerdictStreamOptions, "order" | "withTest" | "withResult">;
+
+export async function countPreviewRows(db: Database, o: PreviewStreamOptions): Promise<number> {
+  const res = await db.execute<{ n: string }>(sql`select count(*)::bigint as n from preview_inputs v where ${rangeFilter({ ...o, order: "newest" })}`);
+  const n = Number(res.rows[0]?.n ?? 0);
+  return o.limit === undefined ? n : Math.min(n, o.limit);
+}
+
+export function streamPreviewRows(db: Database, o: PreviewStreamOptions): AsyncGenerator<PreviewRow[]> {
   const f = { ...o, order: "newest" as const };
   return keysetBatches(async (after, size) => {
     const res = await db.execute(sql`
-      with page as materialized (
-        select v.seq, v.id, v.test_id, v.link_ref, v.verdict, v.headroom_db, v.profile_slug, v.profile_version
-        from verdicts v
-        where ${rangeFilter(f)} and ${after === null ? sql`true` : sql`v.seq < ${after}`}
-        order by v.seq desc
-        limit ${size})
-      select p.seq, p.id, p.link_ref as "linkRef", p.verdict, p.headroom_db as "headroomDb",
-             p.profile_slug as "profileSlug", p.profile_version as "profileVersion", t.input
-      from page p join tests t on t.id = p.test_id
-      order by p.seq desc`);
+      select v.seq, v.verdict_id as "verdictId", v.verdict, v.headroom_db as "headroomDb", v.profile_slug as "profileSlug",
+             v.profile_version as "profileVersion", v.packed
+      from preview_inputs v
+      where ${rangeFilter(f)} and ${after === null ? sql`true` : sql`v.seq < ${after}`}
+      order by v.seq desc
+      limit ${size}`);
     const rows = res.rows as unknown as PreviewRow[];
     for (const r of rows) r.seq = Number(r.seq);
     return rows;
   }, o);
+}
+
+/**
+ * Splits the newest `total` stored tests that match `o` into `parts` contiguous ranges of nearly equal
+ * size, newest range first, each as stream options (start after a seq, take so many), so that separate
+ * threads can each stream one range.
+ */
+export async function splitPreviewRange(db: Database, o: PreviewStreamOptions, total: number, parts: number): Promise<PreviewStreamOptions[]> {
+  const f = { ...o, order: "newest" as const };
+  const seqAt = async (offset: number) => {
+    const res = await db.execute<{ seq: string }>(sql`
+      select v.seq from preview_inputs v where ${rangeFilter(f)} order by v.seq desc offset ${offset} limit 1`);
+    return res.rows[0] ? Number(res.rows[0].seq) : null;
+  };
+  const top = await seqAt(0);
+  if (top === null || total === 0) return [];
+  const n = Math.max(1, Math.min(parts, total));
+  const starts = Array.from({ length: n + 1 }, (_, i) => Math.floor((total * i) / n));
+  const ranges: PreviewStreamOptions[] = [];
+  for (let i = 0; i < n; i++) {
+    // Pinning the first range below the current top keeps tests stored during the preview out of it.
+    const after = i === 0 ? top + 1 : await seqAt(starts[i] - 1);
+    if (after === null) break;
+    ranges.push({ ...o, afterSeq: after, limit: starts[i + 1] - starts[i] });
+  }
+  return ranges;
 }

@@ -1,20 +1,29 @@
 // Impact preview: re-grade stored tests under a draft and count how verdicts would move. Tests stream
 // from the database in batches (db/queries/verdict-stream.ts); only counters and a capped list of changed
 // links are kept, so memory stays flat from a thousand tests to every test the organisation has.
-import { countVerdicts, streamPreviewRows } from "@/db/queries/verdict-stream";
+import { countPreviewRows, splitPreviewRange } from "@/db/queries/verdict-stream";
 import { findProfile, latestVersion } from "@/db/queries/profiles";
-import { grade } from "@/lib/grading";
 import { authorise, ConflictError, InvalidInputError, NotFoundError } from "./access";
 import type { ProfileContext } from "./context";
 import { validateLimits, type EngineProfile } from "./limits";
+import { gradeRangesOnThreads, defaultThreadCount } from "./preview-threads";
+import { regradeRange, VERDICTS, type BatchOutcome, type ChangedLink, type VerdictValue } from "./regrade-batch";
 
-export const VERDICTS = ["pass", "marginal", "fail"] as const;
-export type VerdictValue = (typeof VERDICTS)[number];
+export type { ChangedLink, VerdictValue };
+
 export type TransitionMatrix = Record<VerdictValue, Record<VerdictValue, number>>;
 
 export const DEFAULT_PREVIEW_LIMIT = 1000;
 export const CHANGED_LINKS_CAP = 500;
-const YIELD_EVERY = 100;
+/**
+ * From this many tests on, grading moves to worker threads; below it their start-up costs more than it
+ * saves. GLASSGRADE_PREVIEW_THREADS_FROM overrides it (the end-to-end tests set 1 so that the built app's
+ * bundled grading thread is exercised).
+ */
+export function threadedFrom(): number {
+  const fromEnv = Number(process.env.GLASSGRADE_PREVIEW_THREADS_FROM);
+  return Number.isInteger(fromEnv) && fromEnv > 0 ? fromEnv : 20_000;
+}
 
 export interface PreviewRequest {
   /** How many of the newest tests to re-grade: DEFAULT_PREVIEW_LIMIT when absent, or "all". */
@@ -27,18 +36,11 @@ export interface PreviewRequest {
   from?: Date;
   to?: Date;
   batchSize?: number;
-}
-
-export interface ChangedLink {
-  verdictId: string;
-  seq: number;
-  linkRef: string;
-  before: VerdictValue;
-  after: VerdictValue;
-  headroomBefore: number | null;
-  headroomAfter: number | null;
-  storedProfile: string;
-  reasonCodes: string[];
+  /**
+   * Grading threads: 0 grades on the request's thread; absent picks one per core for previews of
+   * threadedFrom() tests or more and none below.
+   */
+  threads?: number;
 }
 
 export interface PreviewSummary {
@@ -93,54 +95,44 @@ export async function* previewImpact(
 ): AsyncGenerator<PreviewEvent> {
   authorise(ctx.actor, "profiles:edit");
   checkPreviewRequest(req);
-  const opts = { organisationId: ctx.actor.organisationId, from: req.from, to: req.to, profileSlugs: req.profileSlugs, limit: req.limit === "all" ? undefined : (req.limit ?? DEFAULT_PREVIEW_LIMIT), order: "newest" as const, withTest: true, batchSize: req.batchSize ?? 2000 };
-  const total = await countVerdicts(ctx.db, opts);
+  const opts = { organisationId: ctx.actor.organisationId, from: req.from, to: req.to, profileSlugs: req.profileSlugs, limit: req.limit === "all" ? undefined : (req.limit ?? DEFAULT_PREVIEW_LIMIT), order: "newest" as const, batchSize: req.batchSize ?? 2000 };
+  const total = await countPreviewRows(ctx.db, opts);
   const matrix = emptyMatrix();
-  const changedLinks: ChangedLink[] = [];
   let graded = 0;
   let failedToGrade = 0;
   let changed = 0;
   let done = 0;
   yield { type: "progress", done, total };
 
-  for await (const batch of streamPreviewRows(ctx.db, opts)) {
-    if (signal?.aborted) return;
-    for (let i = 0; i < batch.length; i++) {
-      // Let the event loop breathe now and then: the next batch is arriving on the socket meanwhile, and
-      // a loop that never yields would stall PostgreSQL once the socket buffer is full.
-      if (i % YIELD_EVERY === YIELD_EVERY - 1) await new Promise<void>((r) => setImmediate(r));
-      const row = batch[i];
-      let result: ReturnType<typeof grade>;
-      try {
-        result = grade(row.input as Parameters<typeof grade>[0], profile);
-      } catch {
-        failedToGrade++;
-        continue;
-      }
-      graded++;
-      const before = row.verdict;
-      const after = result.verdict as VerdictValue;
-      matrix[before][after]++;
-      if (before !== after) {
-        changed++;
-        if (changedLinks.length < CHANGED_LINKS_CAP) {
-          changedLinks.push({
-            verdictId: row.id,
-            seq: row.seq,
-            linkRef: row.linkRef,
-            before,
-            after,
-            headroomBefore: row.headroomDb,
-            headroomAfter: result.headroomDb,
-            storedProfile: `${row.profileSlug}@${row.profileVersion}`,
-            reasonCodes: [...new Set(result.reasons.filter((r) => r.severity !== "info").map((r) => r.code))],
-          });
-        }
-      }
+  const threads = req.threads ?? (total >= threadedFrom() ? defaultThreadCount() : 0);
+  const ranges = threads > 0 ? await splitPreviewRange(ctx.db, opts, total, threads) : [opts];
+  // Changed links per range, newest range first; joined in that order at the end, so the list is the
+  // same whether one thread walked every range or several walked them side by side.
+  const changedByRange: ChangedLink[][] = ranges.map(() => []);
+  const fold = (range: number, o: BatchOutcome) => {
+    graded += o.graded;
+    failedToGrade += o.failedToGrade;
+    changed += o.changed;
+    done += o.rows;
+    o.transitions.forEach((n, k) => (matrix[VERDICTS[Math.floor(k / 3)]][VERDICTS[k % 3]] += n));
+    changedByRange[range].push(...o.changedLinks);
+  };
+  const outcomes =
+    threads > 0
+      ? gradeRangesOnThreads(profile, ranges, CHANGED_LINKS_CAP)
+      : (async function* () {
+          for await (const outcome of regradeRange(ctx.db, opts, profile, CHANGED_LINKS_CAP)) yield { range: 0, outcome };
+        })();
+  try {
+    for await (const { range, outcome } of outcomes) {
+      if (signal?.aborted) return;
+      fold(range, outcome);
+      yield { type: "progress", done, total };
     }
-    done += batch.length;
-    yield { type: "progress", done, total };
+  } finally {
+    await outcomes.return(undefined);
   }
+  const changedLinks = changedByRange.flat().slice(0, CHANGED_LINKS_CAP);
   yield {
     type: "result",
     summary: {

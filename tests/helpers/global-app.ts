@@ -32,6 +32,8 @@ export default async function setup() {
         NEXT_TELEMETRY_DISABLED: "1",
         EMAIL_SERVER: `smtp://127.0.0.1:${SMTP_PORT}`,
         DEV_MAILBOX: "1",
+        // Every impact preview on grading threads, so the bundled worker is what the e2e tests exercise.
+        GLASSGRADE_PREVIEW_THREADS_FROM: "1",
       },
       stdio: ["ignore", "inherit", "inherit"],
     });

@@ -75,6 +75,25 @@ describe("impact preview", () => {
     expect(summary.profile).toEqual({ slug: "tight-splices", version: 1 });
   });
 
+  it("gives the same answer on grading threads as on the request's thread, changed links in the same order", async () => {
+    const inThread = await run(o, draft, { limit: "all", batchSize: 50, threads: 0 });
+    const threaded = await run(o, draft, { limit: "all", batchSize: 50, threads: 2 });
+    expect(threaded.summary).toEqual(inThread.summary);
+    expect(threaded.summary.changedLinks.length).toBeGreaterThan(0);
+    // Newest first, as streamed, even though batches finish on different threads.
+    const seqs = threaded.summary.changedLinks.map((c) => c.seq);
+    expect([...seqs].sort((a, b) => b - a)).toEqual(seqs);
+    expect(threaded.progress.at(-1)).toEqual({ type: "progress", done: 700, total: 700 });
+  });
+
+  it("stops its grading threads when the reader stops early", async () => {
+    const events = previewImpact(o.ctx("engineer"), draft, { limit: "all", batchSize: 20, threads: 2 });
+    await events.next();
+    await events.next();
+    // return() runs the generator's cleanup; a thread left running would keep the test process alive.
+    await expect(events.return(undefined)).resolves.toEqual({ done: true, value: undefined });
+  });
+
   it("can take only the newest N tests", async () => {
     const { summary } = await run(o, draft, { limit: 100, batchSize: 30 });
     expect(summary.total).toBe(100);
