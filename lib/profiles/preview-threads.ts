@@ -21,15 +21,21 @@ const IDLE_MS = 5 * 60_000;
 const idle: { worker: Worker; timer: NodeJS.Timeout }[] = [];
 let nextJobId = 1;
 
+// A grading thread keeps counters and at most CHANGED_LINKS_CAP links, whatever the number of tests, so a
+// small heap is plenty; the cap makes that a guarantee (a thread that held its tests would stop with an
+// error rather than grow the server).
+export const THREAD_HEAP_MB = 256;
+const resourceLimits = { maxOldGenerationSizeMb: THREAD_HEAP_MB };
+
 function spawn(): Worker {
   // Run from source (tests, scripts) this module is TypeScript: the thread registers tsx first, as the
   // scripts do. Built by Next, the module is JavaScript and the bundler follows the second form below,
   // bundling the worker with its imports; Reflect.construct keeps the first form out of its analysis.
   if (import.meta.url.endsWith(".ts")) {
     const source = path.join(path.dirname(fileURLToPath(import.meta.url)), "impact-worker.ts");
-    return Reflect.construct(Worker, [`require("tsx/cjs"); require(${JSON.stringify(source)});`, { eval: true }]) as Worker;
+    return Reflect.construct(Worker, [`require("tsx/cjs"); require(${JSON.stringify(source)});`, { eval: true, resourceLimits }]) as Worker;
   }
-  return new Worker(new URL("./impact-worker.ts", import.meta.url));
+  return new Worker(new URL("./impact-worker.ts", import.meta.url), { resourceLimits });
 }
 
 function acquire(): Worker {

@@ -41,7 +41,7 @@ async function main() {
   const { syntheticLinkTest, seededRandom } = await import("../../tests/helpers/synthetic-links");
   const { cloneTemplate, saveDraft } = await import("../../lib/profiles/drafts");
   const { draftProfileFor, previewImpact } = await import("../../lib/profiles/impact-preview");
-  const { defaultThreadCount } = await import("../../lib/profiles/preview-threads");
+  const { defaultThreadCount, THREAD_HEAP_MB } = await import("../../lib/profiles/preview-threads");
   await runMigrations();
   const db = getDb();
 
@@ -120,16 +120,16 @@ async function main() {
   // Warm both code paths so neither side pays the JIT's start-up cost (for the preview that includes
   // starting its grading threads, which then stay for the next preview, as in a running server), then
   // alternate preview and engine twice and average, so a machine that gets busier or quieter skews both
-  // sides alike. The preview runs first, before any 200k-test array exists, so its memory figures are its own.
+  // sides alike. The previews run first, before any 200k-test array exists, so their memory figures are their own.
   const rssBeforeThreads = process.memoryUsage().rss;
   for (const t of Array.from({ length: 2000 }, (_, j) => syntheticLinkTest(j, seededRandom(1)))) grade(t, draft);
   const coldStart = await previewRun(undefined, 20_000);
   const preview1 = await previewRun();
-  const engine1 = engineRun();
   const single1 = await previewRun(0);
+  const engine1 = engineRun();
   const preview2 = await previewRun();
-  const engine2 = engineRun();
   const single2 = await previewRun(0);
+  const engine2 = engineRun();
   const previewMs = (preview1.ms + preview2.ms) / 2;
   const engineMs = (engine1.ms + engine2.ms) / 2;
   const summary = preview1.summary;
@@ -146,6 +146,10 @@ async function main() {
   console.log(`  engine in memory, same inputs, one thread:     ${engineRate.toFixed(0).padStart(8)} tests/s  (mean of ${(engine1.ms / 1000).toFixed(1)} s and ${(engine2.ms / 1000).toFixed(1)} s)  [checksum ${sink}]`);
   console.log(`  ratio preview / engine:                        ${(previewRate / engineRate).toFixed(2)}  (goal >= 0.50)`);
   console.log(`  ratio single-thread preview / engine:          ${(singleRate / engineRate).toFixed(2)}`);
+  // Only the first round's previews run before the engine's 200k-test array has ever existed, so only
+  // their memory figures are the preview's own.
+  console.log(`  single-thread preview: RSS ${mb(single1.rssStart)} MB before, peak ${mb(single1.peakRss)} MB; at ${single1.checkpoints.join(", ")}`);
+  console.log(`  each grading thread's heap is capped at ${THREAD_HEAP_MB} MB`);
   console.log(`  first preview after start-up (20,000 tests, grading threads starting): ${(coldStart.ms / 1000).toFixed(1)} s`);
   console.log(`  RSS before any grading thread ${mb(rssBeforeThreads)} MB; before the measured preview ${mb(rssStart)} MB, peak during it ${mb(peakRss)} MB (+${mb(peakRss - rssStart)} MB); at ${checkpoints.join(", ")}`);
   await closeDb();
