@@ -9,6 +9,7 @@ export const PROBLEMS = {
   unauthorized: { status: 401, title: "Missing or invalid credentials" },
   forbidden: { status: 403, title: "Not allowed for this key or role" },
   not_found: { status: 404, title: "Resource not found" },
+  method_not_allowed: { status: 405, title: "Method not allowed on this route" },
   conflict: { status: 409, title: "Conflicting request" },
   idempotency_key_reused: { status: 422, title: "Idempotency-Key was used with a different request" },
   idempotency_in_flight: { status: 409, title: "A request with this Idempotency-Key is still in progress" },

@@ -1,6 +1,7 @@
 // Impact preview: re-grade stored tests under a draft and count how verdicts would move. Tests stream
 // from the database in batches (db/queries/verdict-stream.ts); only counters and a capped list of changed
-// links are kept, so memory stays flat from a thousand tests to every test the organisation has.
+// links are kept, so memory stays flat from a thousand tests to every test the organisation has. Large
+// previews split the range across grading threads (preview-threads.ts) with the same answer.
 import { countPreviewRows, splitPreviewRange } from "@/db/queries/verdict-stream";
 import { findProfile, latestVersion } from "@/db/queries/profiles";
 import { authorise, ConflictError, InvalidInputError, NotFoundError } from "./access";

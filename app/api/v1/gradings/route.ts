@@ -6,6 +6,7 @@ import { VerdictResourceSchema } from "@/lib/api/schemas/verdicts";
 import { withApiKey } from "@/lib/api/with-api-key";
 import { gradeAndStore } from "@/lib/verdicts/grade";
 import { toVerdictResource } from "@/lib/verdicts/present";
+import { refuseOtherMethods } from "@/lib/api/other-methods";
 
 export const dynamic = "force-dynamic";
 
@@ -21,3 +22,5 @@ export const POST = withApiKey(
   },
   { route: "/api/v1/gradings", scope: "grade" },
 );
+
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods("/api/v1/gradings", ["POST"]);

@@ -3,6 +3,7 @@ import { checkHealth } from "@/lib/health";
 import { withPublic } from "@/lib/api/with-api-key";
 import { ApiError } from "@/lib/api/problem";
 import { APP_VERSION } from "@/lib/version";
+import { refuseOtherMethods } from "@/lib/api/other-methods";
 
 export const dynamic = "force-dynamic";
 
@@ -16,3 +17,5 @@ export const GET = withPublic(
   },
   { route: "/api/v1/health" },
 );
+
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods("/api/v1/health", ["GET"]);

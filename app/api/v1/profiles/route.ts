@@ -3,6 +3,7 @@ import { listProfilesForKey } from "@/lib/api/profiles-read";
 import { json } from "@/lib/api/respond";
 import { ProfileListSchema } from "@/lib/api/schemas/profiles";
 import { withApiKey } from "@/lib/api/with-api-key";
+import { refuseOtherMethods } from "@/lib/api/other-methods";
 
 export const dynamic = "force-dynamic";
 
@@ -10,3 +11,5 @@ export const GET = withApiKey(async (ctx) => json(ProfileListSchema, await listP
   route: "/api/v1/profiles",
   scope: "profiles:read",
 });
+
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods("/api/v1/profiles", ["GET"]);

@@ -5,6 +5,7 @@ import { json } from "@/lib/api/respond";
 import { VerdictListQuerySchema, VerdictListSchema } from "@/lib/api/schemas/verdicts";
 import { withApiKey } from "@/lib/api/with-api-key";
 import { BadCursorError, listVerdictPage } from "@/lib/verdicts/read";
+import { refuseOtherMethods } from "@/lib/api/other-methods";
 
 export const dynamic = "force-dynamic";
 
@@ -22,3 +23,5 @@ export const GET = withApiKey(
   },
   { route: "/api/v1/verdicts", scope: "verdicts:read" },
 );
+
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods("/api/v1/verdicts", ["GET"]);

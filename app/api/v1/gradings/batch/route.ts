@@ -9,6 +9,7 @@ import { withApiKey } from "@/lib/api/with-api-key";
 import { LinkTestSchema, type LinkTest } from "@/lib/grading/schema";
 import { gradeAndStore } from "@/lib/verdicts/grade";
 import { toVerdictSummary } from "@/lib/verdicts/present";
+import { refuseOtherMethods } from "@/lib/api/other-methods";
 
 export const dynamic = "force-dynamic";
 
@@ -34,3 +35,5 @@ export const POST = withApiKey(
   },
   { route: "/api/v1/gradings/batch", scope: "grade", maxBodyBytes: 16 * 1024 * 1024 },
 );
+
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods("/api/v1/gradings/batch", ["POST"]);

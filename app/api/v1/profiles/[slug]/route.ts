@@ -4,6 +4,7 @@ import { getProfileForKey } from "@/lib/api/profiles-read";
 import { json } from "@/lib/api/respond";
 import { ProfileDetailSchema } from "@/lib/api/schemas/profiles";
 import { withApiKey } from "@/lib/api/with-api-key";
+import { refuseOtherMethods } from "@/lib/api/other-methods";
 
 export const dynamic = "force-dynamic";
 
@@ -15,3 +16,5 @@ export const GET = withApiKey<{ slug: string }>(
   },
   { route: "/api/v1/profiles/{slug}", scope: "profiles:read" },
 );
+
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods("/api/v1/profiles/{slug}", ["GET"]);

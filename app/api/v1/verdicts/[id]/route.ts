@@ -4,6 +4,7 @@ import { json } from "@/lib/api/respond";
 import { VerdictResourceSchema } from "@/lib/api/schemas/verdicts";
 import { withApiKey } from "@/lib/api/with-api-key";
 import { getVerdict } from "@/lib/verdicts/read";
+import { refuseOtherMethods } from "@/lib/api/other-methods";
 
 export const dynamic = "force-dynamic";
 
@@ -16,3 +17,5 @@ export const GET = withApiKey<{ id: string }>(
   },
   { route: "/api/v1/verdicts/{id}", scope: "verdicts:read" },
 );
+
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods("/api/v1/verdicts/{id}", ["GET"]);

@@ -4,6 +4,7 @@ import { json } from "@/lib/api/respond";
 import { ReplayRequestSchema, ReplayResultSchema } from "@/lib/api/schemas/verdicts";
 import { withApiKey } from "@/lib/api/with-api-key";
 import { replayVerdict } from "@/lib/verdicts/replay";
+import { refuseOtherMethods } from "@/lib/api/other-methods";
 
 export const dynamic = "force-dynamic";
 
@@ -24,3 +25,5 @@ export const POST = withApiKey<{ id: string }>(
   },
   { route: "/api/v1/verdicts/{id}/replay", scope: "verdicts:read" },
 );
+
+export const { GET, PUT, PATCH, DELETE } = refuseOtherMethods("/api/v1/verdicts/{id}/replay", ["POST"]);

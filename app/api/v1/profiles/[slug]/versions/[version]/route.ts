@@ -4,6 +4,7 @@ import { getProfileVersionForKey } from "@/lib/api/profiles-read";
 import { json } from "@/lib/api/respond";
 import { ProfileVersionSchema } from "@/lib/api/schemas/profiles";
 import { withApiKey } from "@/lib/api/with-api-key";
+import { refuseOtherMethods } from "@/lib/api/other-methods";
 
 export const dynamic = "force-dynamic";
 
@@ -16,3 +17,5 @@ export const GET = withApiKey<{ slug: string; version: string }>(
   },
   { route: "/api/v1/profiles/{slug}/versions/{version}", scope: "profiles:read" },
 );
+
+export const { POST, PUT, PATCH, DELETE } = refuseOtherMethods("/api/v1/profiles/{slug}/versions/{version}", ["GET"]);
