@@ -55,4 +55,5 @@ cat <<MSG
   Stop with Ctrl-C; stop the database with: npm run db:stop
 
 MSG
-node node_modules/next/dist/bin/next start -p "$PORT"
+# Loopback only by default: the demo's accounts share one published password. HOST=0.0.0.0 serves the LAN.
+node node_modules/next/dist/bin/next start -p "$PORT" -H "${HOST:-127.0.0.1}"
