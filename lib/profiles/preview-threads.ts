@@ -12,9 +12,13 @@ import type { Profile } from "@/lib/grading/schema";
 import type { FromWorker, ToWorker } from "./impact-worker";
 import type { BatchOutcome } from "./regrade-batch";
 
-/** Threads for one preview: one per core, capped so that one preview cannot take a large server. */
+/**
+ * Threads for one preview: one per core, capped so that one preview cannot take a large server; none on a
+ * single core, where a thread would only add the merging to the same core's work.
+ */
 export function defaultThreadCount(): number {
-  return Math.max(1, Math.min(4, availableParallelism()));
+  const cores = availableParallelism();
+  return cores < 2 ? 0 : Math.min(4, cores);
 }
 
 const IDLE_MS = 5 * 60_000;
