@@ -52,10 +52,15 @@ function rangeFilter(o: VerdictStreamOptions): SQL {
   return sql.join(parts, sql` and `);
 }
 
-export async function countVerdicts(db: Database, o: VerdictStreamOptions): Promise<number> {
-  const res = await db.execute<{ n: string }>(sql`select count(*)::bigint as n from verdicts v where ${rangeFilter(o)}`);
+/** Rows of `table` (verdicts or preview_inputs, one row per verdict in both) that a walk over `o` will see. */
+async function countRows(db: Database, table: SQL, o: VerdictStreamOptions): Promise<number> {
+  const res = await db.execute<{ n: string }>(sql`select count(*)::bigint as n from ${table} v where ${rangeFilter(o)}`);
   const n = Number(res.rows[0]?.n ?? 0);
   return o.limit === undefined ? n : Math.min(n, o.limit);
+}
+
+export function countVerdicts(db: Database, o: VerdictStreamOptions): Promise<number> {
+  return countRows(db, sql`verdicts`, o);
 }
 
 // The page of verdicts is cut first (an index range scan on (organisation_id, seq)) and only then joined
@@ -132,10 +137,8 @@ export interface PreviewRow {
 
 export type PreviewStreamOptions = Omit<VerdictStreamOptions, "order" | "withTest" | "withResult">;
 
-export async function countPreviewRows(db: Database, o: PreviewStreamOptions): Promise<number> {
-  const res = await db.execute<{ n: string }>(sql`select count(*)::bigint as n from preview_inputs v where ${rangeFilter({ ...o, order: "newest" })}`);
-  const n = Number(res.rows[0]?.n ?? 0);
-  return o.limit === undefined ? n : Math.min(n, o.limit);
+export function countPreviewRows(db: Database, o: PreviewStreamOptions): Promise<number> {
+  return countRows(db, sql`preview_inputs`, { ...o, order: "newest" });
 }
 
 export function streamPreviewRows(db: Database, o: PreviewStreamOptions): AsyncGenerator<PreviewRow[]> {

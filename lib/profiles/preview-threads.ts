@@ -86,22 +86,23 @@ export async function* gradeRangesOnThreads(
   const lanes = ranges.map((range, i) => {
     const worker = acquire();
     const id = nextJobId++;
-    const lane = { worker, done: false };
-    const onMessage = (msg: FromWorker) => {
-      if (msg.id !== id) return;
-      if (msg.type === "batch") push({ range: i, outcome: msg.outcome });
-      else if (msg.type === "done") {
-        lane.done = true;
-        wake?.();
-      } else push(new Error(`grading thread: ${msg.message}`));
+    const lane = {
+      worker,
+      finished: false,
+      onMessage: (msg: FromWorker) => {
+        if (msg.id !== id) return;
+        if (msg.type === "batch") push({ range: i, outcome: msg.outcome });
+        else if (msg.type === "done") {
+          lane.finished = true;
+          wake?.();
+        } else push(new Error(`grading thread: ${msg.message}`));
+      },
+      onError: (err: Error) => push(err),
+      onExit: (code: number) => push(new Error(`grading thread stopped (exit code ${code}) before its range was done`)),
     };
-    const onError = (err: Error) => push(err);
-    const onExit = (code: number) => push(new Error(`grading thread stopped (exit code ${code}) before its range was done`));
-    worker.on("message", onMessage);
-    worker.on("error", onError);
-    worker.on("exit", onExit);
+    worker.on("message", lane.onMessage).on("error", lane.onError).on("exit", lane.onExit);
     worker.postMessage({ type: "job", id, job: { profile, range, keepChanged } } satisfies ToWorker);
-    return { ...lane, detach: () => (worker.off("message", onMessage), worker.off("error", onError), worker.off("exit", onExit)), get finished() { return lane.done; } };
+    return lane;
   });
   try {
     while (queue.length > 0 || lanes.some((l) => !l.finished)) {
@@ -116,7 +117,7 @@ export async function* gradeRangesOnThreads(
     }
   } finally {
     for (const lane of lanes) {
-      lane.detach();
+      lane.worker.off("message", lane.onMessage).off("error", lane.onError).off("exit", lane.onExit);
       // A thread that finished its range goes back to the idle set; one stopped midway is ended.
       if (lane.finished) release(lane.worker);
       else await lane.worker.terminate();

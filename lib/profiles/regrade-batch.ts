@@ -37,12 +37,12 @@ const VERDICT_INDEX: Record<VerdictValue, number> = { pass: 0, marginal: 1, fail
 /** Rows graded between chances for the event loop to read the socket. */
 const SLICE = 100;
 
-export function emptyOutcome(): BatchOutcome {
+function emptyOutcome(): BatchOutcome {
   return { rows: 0, graded: 0, failedToGrade: 0, transitions: [0, 0, 0, 0, 0, 0, 0, 0, 0], changed: 0, changedLinks: [] };
 }
 
 /** Grades `rows` into `out`, adding changed links while fewer than `keepChanged` are held. */
-export function regradeRows(rows: PreviewRow[], profile: Profile, keepChanged: number, out: BatchOutcome = emptyOutcome()): BatchOutcome {
+function regradeRows(rows: PreviewRow[], profile: Profile, keepChanged: number, out: BatchOutcome = emptyOutcome()): BatchOutcome {
   for (const row of rows) {
     out.rows++;
     let result: ReturnType<typeof grade>;

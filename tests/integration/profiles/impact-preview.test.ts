@@ -90,8 +90,12 @@ describe("impact preview", () => {
     const events = previewImpact(o.ctx("engineer"), draft, { limit: "all", batchSize: 20, threads: 2 });
     await events.next();
     await events.next();
-    // return() runs the generator's cleanup; a thread left running would keep the test process alive.
+    // return() runs the generator's cleanup, which ends the threads still working.
     await expect(events.return(undefined)).resolves.toEqual({ done: true, value: undefined });
+    // The next threaded preview starts clean and gets the whole answer.
+    const next = await run(o, draft, { limit: "all", batchSize: 50, threads: 2 });
+    expect(next.summary.total).toBe(700);
+    expect(next.summary).toEqual((await run(o, draft, { limit: "all", threads: 0 })).summary);
   });
 
   it("can take only the newest N tests", async () => {

@@ -60,6 +60,19 @@ describe("OpenAPI document", () => {
     expect(missing).toEqual([]);
   });
 
+  it("answers every method on every route: served, or refused with a 405 problem (refuseOtherMethods)", () => {
+    const silent: string[] = [];
+    for (const f of routeFiles(API_DIR)) {
+      const src = readFileSync(f, "utf8");
+      const refused = /export const \{([^}]*)\} = refuseOtherMethods\(/.exec(src)?.[1].split(",").map((m) => m.trim()) ?? [];
+      for (const m of METHODS) {
+        const served = new RegExp(`export (const|async function|function) ${m}\\b`).test(src);
+        if (!served && !refused.includes(m)) silent.push(`${m} ${openApiPath(f)}`);
+      }
+    }
+    expect(silent).toEqual([]);
+  });
+
   it("gives every operation a summary, a description, an operationId and an example for its success response", () => {
     for (const [p, item] of Object.entries(doc.paths ?? {})) {
       for (const [method, op] of Object.entries(item as Record<string, any>)) {
